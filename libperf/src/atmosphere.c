@@ -1,0 +1,279 @@
+/* The ISO 2533:1975 standard atmosphere (= ICAO Doc 7488, = US 1976 below 84,852 m). */
+#include "acperf/atmosphere.h"
+
+#include "acperf/status.h"
+#include "atmosphere_layers.h"
+#include "internal.h"
+
+/* Layers of ISO 2533:1975 table 4: base geopotential altitude (m), lapse rate
+   (K/m), base temperature (K), base pressure (Pa). Base pressures are the
+   standard's hydrostatic recurrence from 101,325 Pa evaluated with 40-digit
+   decimal arithmetic (the ISO tables print 6 digits: 2.26320E+04 Pa at
+   11 km, 5.47487E+03 at 20 km, 8.68014E+02 at 32 km, ...). The first layer
+   extends down to -5,000 m with the same lapse rate. */
+const atm_layer ATM_LAYERS[ATM_NLAYERS] = {
+    {0.0, -0.0065, 288.15, 101325.0, -ACP_G0 / (ACP_R_AIR * -0.0065)},
+    {11000.0, 0.0, 216.65, 22632.040095007799, 0.0},
+    {20000.0, 0.001, 216.65, 5474.8774242810459, -ACP_G0 / (ACP_R_AIR * 0.001)},
+    {32000.0, 0.0028, 228.65, 868.01577662021338, -ACP_G0 / (ACP_R_AIR * 0.0028)},
+    {47000.0, 0.0, 270.65, 110.90577336730986, 0.0},
+    {51000.0, -0.0028, 270.65, 66.938528121179633, -ACP_G0 / (ACP_R_AIR * -0.0028)},
+    {71000.0, -0.002, 214.65, 3.9563921603965990, -ACP_G0 / (ACP_R_AIR * -0.002)},
+};
+
+/* Index of the layer holding geopotential altitude h (h already range-checked). */
+static int layer_of_altitude(double h) {
+  int i = ATM_NLAYERS - 1;
+  while (i > 0 && h < ATM_LAYERS[i].h) --i;
+  return i;
+}
+
+void atm_standard(double hp, double *temperature, double *pressure) {
+  const atm_layer *l = &ATM_LAYERS[layer_of_altitude(hp)];
+  const double dh = hp - l->h;
+  const double t = l->t + l->lapse * dh;
+  *temperature = t;
+  *pressure = l->lapse == 0.0 ? l->p * exp(-ACP_G0 * dh / (ACP_R_AIR * l->t))
+                              : l->p * pow(t / l->t, l->exponent);
+}
+
+int atm_check(double hp, double dtemp) {
+  if (!isfinite(hp) || !isfinite(dtemp)) return ACP_ERR_INVALID;
+  if (!acp_in_range(hp, ACP_ISA_HP_MIN, ACP_ISA_HP_MAX)) return ACP_ERR_RANGE;
+  if (!acp_in_range(dtemp, ACP_ISA_DTEMP_MIN, ACP_ISA_DTEMP_MAX)) return ACP_ERR_RANGE;
+  return ACP_OK;
+}
+
+static void set_nan(acp_atmos *out) {
+  out->temperature = out->pressure = out->density = ACP_NAN;
+  out->sound_speed = out->dynamic_viscosity = out->kinematic_viscosity = ACP_NAN;
+}
+
+/* Sutherland's law, ISO 2533:1975 eq. 22. */
+static double sutherland(double t) {
+  return ACP_SUTHERLAND_BETA * t * sqrt(t) / (t + ACP_SUTHERLAND_S);
+}
+
+int acp_isa(double hp, double dtemp, acp_atmos *out) {
+  if (!out) return ACP_ERR_INVALID;
+  int st = atm_check(hp, dtemp);
+  if (st != ACP_OK) {
+    set_nan(out);
+    return st;
+  }
+  double tstd, p;
+  atm_standard(hp, &tstd, &p);
+  const double t = tstd + dtemp;
+  out->temperature = t;
+  out->pressure = p;
+  out->density = p / (ACP_R_AIR * t);
+  out->sound_speed = sqrt(ACP_GAMMA * ACP_R_AIR * t);
+  out->dynamic_viscosity = sutherland(t);
+  out->kinematic_viscosity = out->dynamic_viscosity / out->density;
+  return ACP_OK;
+}
+
+size_t acp_isa_n(size_t n, const double *hp, const double *dtemp, double *temperature,
+                 double *pressure, double *density, double *sound_speed,
+                 double *dynamic_viscosity, double *kinematic_viscosity) {
+  size_t bad = 0;
+  for (size_t i = 0; i < n; ++i) {
+    acp_atmos a;
+    if (!hp || acp_isa(hp[i], acp_opt(dtemp, i, 0.0), &a) != ACP_OK) {
+      set_nan(&a);
+      ++bad;
+    }
+    acp_put(temperature ? &temperature[i] : NULL, a.temperature);
+    acp_put(pressure ? &pressure[i] : NULL, a.pressure);
+    acp_put(density ? &density[i] : NULL, a.density);
+    acp_put(sound_speed ? &sound_speed[i] : NULL, a.sound_speed);
+    acp_put(dynamic_viscosity ? &dynamic_viscosity[i] : NULL, a.dynamic_viscosity);
+    acp_put(kinematic_viscosity ? &kinematic_viscosity[i] : NULL, a.kinematic_viscosity);
+  }
+  return bad;
+}
+
+double acp_isa_temperature(double hp, double dtemp) {
+  acp_atmos a;
+  return acp_isa(hp, dtemp, &a) == ACP_OK ? a.temperature : ACP_NAN;
+}
+
+double acp_isa_pressure(double hp) {
+  acp_atmos a;
+  return acp_isa(hp, 0.0, &a) == ACP_OK ? a.pressure : ACP_NAN;
+}
+
+double acp_isa_density(double hp, double dtemp) {
+  acp_atmos a;
+  return acp_isa(hp, dtemp, &a) == ACP_OK ? a.density : ACP_NAN;
+}
+
+double acp_isa_sound_speed(double hp, double dtemp) {
+  acp_atmos a;
+  return acp_isa(hp, dtemp, &a) == ACP_OK ? a.sound_speed : ACP_NAN;
+}
+
+/* A result within a micrometre of the model's edge is round-off, not out of range. */
+static int altitude_result(double h, double *out) {
+  const double tol = 1e-6;
+  if (!(h >= ACP_ISA_HP_MIN - tol && h <= ACP_ISA_HP_MAX + tol)) {
+    *out = ACP_NAN;
+    return ACP_ERR_RANGE;
+  }
+  *out = h;
+  return ACP_OK;
+}
+
+int acp_isa_pressure_altitude(double pressure, double *hp) {
+  if (!hp) return ACP_ERR_INVALID;
+  *hp = ACP_NAN;
+  if (!isfinite(pressure) || pressure <= 0.0) return ACP_ERR_INVALID;
+  int i = ATM_NLAYERS - 1;
+  while (i > 0 && pressure > ATM_LAYERS[i].p) --i;
+  const atm_layer *l = &ATM_LAYERS[i];
+  const double ratio = pressure / l->p;
+  const double h = l->lapse == 0.0
+                       ? l->h - ACP_R_AIR * l->t / ACP_G0 * log(ratio)
+                       : l->h + l->t / l->lapse * (pow(ratio, 1.0 / l->exponent) - 1.0);
+  return altitude_result(h, hp);
+}
+
+size_t acp_isa_pressure_altitude_n(size_t n, const double *pressure, double *hp) {
+  size_t bad = 0;
+  for (size_t i = 0; i < n; ++i) {
+    double h = ACP_NAN;
+    if (!pressure || acp_isa_pressure_altitude(pressure[i], &h) != ACP_OK) ++bad;
+    acp_put(hp ? &hp[i] : NULL, h);
+  }
+  return bad;
+}
+
+#define GEOMETRIC_MIN (-10000.0)
+#define GEOMETRIC_MAX 1.0e6
+
+double acp_geopotential_altitude(double geometric) {
+  if (!acp_in_range(geometric, GEOMETRIC_MIN, GEOMETRIC_MAX)) return ACP_NAN;
+  return ACP_EARTH_RADIUS * geometric / (ACP_EARTH_RADIUS + geometric);
+}
+
+double acp_geometric_altitude(double geopotential) {
+  const double lo = acp_geopotential_altitude(GEOMETRIC_MIN);
+  const double hi = acp_geopotential_altitude(GEOMETRIC_MAX);
+  if (!acp_in_range(geopotential, lo, hi)) return ACP_NAN;
+  return ACP_EARTH_RADIUS * geopotential / (ACP_EARTH_RADIUS - geopotential);
+}
+
+size_t acp_geopotential_altitude_n(size_t n, const double *geometric, double *geopotential) {
+  size_t bad = 0;
+  for (size_t i = 0; i < n; ++i) {
+    const double h = geometric ? acp_geopotential_altitude(geometric[i]) : ACP_NAN;
+    bad += isnan(h) ? 1u : 0u;
+    acp_put(geopotential ? &geopotential[i] : NULL, h);
+  }
+  return bad;
+}
+
+size_t acp_geometric_altitude_n(size_t n, const double *geopotential, double *geometric) {
+  size_t bad = 0;
+  for (size_t i = 0; i < n; ++i) {
+    const double z = geopotential ? acp_geometric_altitude(geopotential[i]) : ACP_NAN;
+    bad += isnan(z) ? 1u : 0u;
+    acp_put(geometric ? &geometric[i] : NULL, z);
+  }
+  return bad;
+}
+
+int acp_isa_density_altitude(double density, double *h) {
+  if (!h) return ACP_ERR_INVALID;
+  *h = ACP_NAN;
+  if (!isfinite(density) || density <= 0.0) return ACP_ERR_INVALID;
+  int i = ATM_NLAYERS - 1;
+  while (i > 0 && density > ATM_LAYERS[i].p / (ACP_R_AIR * ATM_LAYERS[i].t)) --i;
+  const atm_layer *l = &ATM_LAYERS[i];
+  const double ratio = density / (l->p / (ACP_R_AIR * l->t));
+  /* rho/rho_b = (T/Tb)^(exponent - 1) in a gradient layer; exp(-g0 dh/(R Tb)) if isothermal. */
+  const double alt = l->lapse == 0.0
+                         ? l->h - ACP_R_AIR * l->t / ACP_G0 * log(ratio)
+                         : l->h + l->t / l->lapse * (pow(ratio, 1.0 / (l->exponent - 1.0)) - 1.0);
+  return altitude_result(alt, h);
+}
+
+double acp_density_altitude(double hp, double dtemp) {
+  double h;
+  return acp_isa_density_altitude(acp_isa_density(hp, dtemp), &h) == ACP_OK ? h : ACP_NAN;
+}
+
+double acp_isa_deviation(double oat, double hp) {
+  if (!isfinite(oat) || oat <= 0.0) return ACP_NAN;
+  const double dtemp = oat - acp_isa_temperature(hp, 0.0);
+  return acp_in_range(dtemp, ACP_ISA_DTEMP_MIN, ACP_ISA_DTEMP_MAX) ? dtemp : ACP_NAN;
+}
+
+double acp_outside_air_temperature(double dtemp, double hp) {
+  return acp_isa_temperature(hp, dtemp);
+}
+
+static int total_temperature_args(double temp, double mach, double recovery) {
+  return isfinite(temp) && temp > 0.0 && acp_in_range(mach, 0.0, 5.0) &&
+         acp_in_range(recovery, 0.0, 1.0);
+}
+
+double acp_total_temperature(double sat, double mach, double recovery) {
+  if (!total_temperature_args(sat, mach, recovery)) return ACP_NAN;
+  return sat * (1.0 + recovery * 0.5 * (ACP_GAMMA - 1.0) * mach * mach);
+}
+
+double acp_static_temperature(double tat, double mach, double recovery) {
+  if (!total_temperature_args(tat, mach, recovery)) return ACP_NAN;
+  return tat / (1.0 + recovery * 0.5 * (ACP_GAMMA - 1.0) * mach * mach);
+}
+
+#define QNH_MIN 80000.0
+#define QNH_MAX 110000.0
+
+/* Pressure altitude of the altimeter setting, the shift the subscale applies. */
+static int setting_shift(double qnh, double *shift) {
+  *shift = ACP_NAN;
+  if (!isfinite(qnh)) return ACP_ERR_INVALID;
+  if (!acp_in_range(qnh, QNH_MIN, QNH_MAX)) return ACP_ERR_RANGE;
+  return acp_isa_pressure_altitude(qnh, shift);
+}
+
+int acp_pressure_altitude_from_qnh(double indicated, double qnh, double *hp) {
+  if (!hp) return ACP_ERR_INVALID;
+  *hp = ACP_NAN;
+  if (!isfinite(indicated)) return ACP_ERR_INVALID;
+  double shift;
+  int st = setting_shift(qnh, &shift);
+  if (st != ACP_OK) return st;
+  return altitude_result(indicated + shift, hp);
+}
+
+int acp_indicated_altitude_from_qnh(double hp, double qnh, double *indicated) {
+  if (!indicated) return ACP_ERR_INVALID;
+  *indicated = ACP_NAN;
+  int st = atm_check(hp, 0.0);
+  if (st != ACP_OK) return st;
+  double shift;
+  st = setting_shift(qnh, &shift);
+  if (st != ACP_OK) return st;
+  *indicated = hp - shift;
+  return ACP_OK;
+}
+
+int acp_cold_temperature_correction(double height, double elevation, double temperature,
+                                    double *correction) {
+  if (!correction) return ACP_ERR_INVALID;
+  *correction = ACP_NAN;
+  if (!isfinite(height) || !isfinite(elevation) || !isfinite(temperature) || height < 0.0 ||
+      temperature <= 0.0)
+    return ACP_ERR_INVALID;
+  const double tropopause = ATM_LAYERS[1].h;
+  if (!acp_in_range(elevation, ACP_ISA_HP_MIN, tropopause) || elevation + height > tropopause)
+    return ACP_ERR_RANGE;
+  const double l0 = ATM_LAYERS[0].lapse;
+  const double dtemp = temperature - (ACP_T0 + l0 * elevation);
+  if (!acp_in_range(dtemp, ACP_ISA_DTEMP_MIN, ACP_ISA_DTEMP_MAX)) return ACP_ERR_RANGE;
+  *correction = -dtemp / l0 * log1p(l0 * height / (ACP_T0 + l0 * elevation));
+  return ACP_OK;
+}

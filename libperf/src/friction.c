@@ -1,0 +1,48 @@
+/* Flat-plate skin friction for the component drag build-up (Raymer section 12.5.3). */
+#include "acperf/friction.h"
+
+#include "acperf/airspeed.h"
+#include "internal.h"
+
+static int reynolds_ok(double re) { return acp_in_range(re, ACP_REYNOLDS_MIN, ACP_REYNOLDS_MAX); }
+
+double acp_skin_friction_laminar(double reynolds) {
+  if (!reynolds_ok(reynolds)) return ACP_NAN;
+  return 1.328 / sqrt(reynolds);
+}
+
+double acp_skin_friction_turbulent(double reynolds, double mach) {
+  if (!reynolds_ok(reynolds) || !acp_in_range(mach, 0.0, ACP_MACH_MAX)) return ACP_NAN;
+  return 0.455 / (pow(log10(reynolds), 2.58) * pow(1.0 + 0.144 * mach * mach, 0.65));
+}
+
+double acp_skin_friction_mixed(double reynolds, double mach, double laminar_fraction) {
+  if (!acp_in_range(laminar_fraction, 0.0, 1.0)) return ACP_NAN;
+  return laminar_fraction * acp_skin_friction_laminar(reynolds) +
+         (1.0 - laminar_fraction) * acp_skin_friction_turbulent(reynolds, mach);
+}
+
+double acp_roughness_cutoff_reynolds(double length, double roughness, double mach) {
+  if (!isfinite(length) || !isfinite(roughness) || length <= 0.0 || roughness <= 0.0 ||
+      !acp_in_range(mach, 0.0, ACP_MACH_MAX))
+    return ACP_NAN;
+  const double base = pow(length / roughness, 1.053);
+  const double subsonic = 38.21 * base;
+  const double transonic = 44.62 * base * pow(mach, 1.16);
+  return fmax(subsonic, transonic);
+}
+
+double acp_skin_friction(double reynolds, double mach, double laminar_fraction, double length,
+                         double roughness) {
+  if (!acp_in_range(laminar_fraction, 0.0, 1.0) || !reynolds_ok(reynolds) ||
+      !(isfinite(roughness) && roughness >= 0.0) || !(isfinite(length) && length > 0.0))
+    return ACP_NAN;
+  double re_turb = reynolds;
+  if (roughness > 0.0) {
+    const double cutoff = acp_roughness_cutoff_reynolds(length, roughness, mach);
+    if (isnan(cutoff)) return ACP_NAN;
+    re_turb = fmin(reynolds, fmax(cutoff, ACP_REYNOLDS_MIN));
+  }
+  return laminar_fraction * acp_skin_friction_laminar(reynolds) +
+         (1.0 - laminar_fraction) * acp_skin_friction_turbulent(re_turb, mach);
+}
