@@ -16,7 +16,7 @@
 
 /* Impact-to-static pressure ratio qc/p of a Mach number (M >= 0). */
 static double mach_to_ratio(double m) {
-  if (m <= 1.0) return pow(1.0 + 0.2 * m * m, 3.5) - 1.0;
+  if (m <= 1.0) return expm1(3.5 * log1p(0.2 * m * m)); /* no cancellation at low speed */
   const double m2 = m * m;
   return RAYLEIGH_K * m2 * m2 * m2 * m / pow(7.0 * m2 - 1.0, 2.5) - 1.0;
 }
@@ -26,7 +26,7 @@ int acp_pressure_ratio_to_mach(double ratio, double *mach) {
   *mach = ACP_NAN;
   if (!isfinite(ratio) || ratio < 0.0) return ACP_ERR_INVALID;
   if (ratio <= RATIO_MACH1) {
-    *mach = sqrt(5.0 * (pow(ratio + 1.0, 2.0 / 7.0) - 1.0));
+    *mach = sqrt(5.0 * expm1(log1p(ratio) / 3.5));
     return ACP_OK;
   }
   if (ratio > mach_to_ratio(ACP_MACH_MAX) * (1.0 + 1e-14)) return ACP_ERR_RANGE;
