@@ -366,27 +366,3 @@ size_t acp_drag_curve(const acp_aircraft *ac, double mass, double hp, double dte
   }
   return bad;
 }
-
-size_t acp_polar_n(const acp_aircraft *ac, size_t n, const double *mass, const double *hp,
-                   const double *dtemp, const double *tas, const double *load_factor,
-                   double *mach, double *cl, double *cd0, double *cd_induced, double *cd_wave,
-                   double *cd, double *mach_critical) {
-  size_t bad = 0;
-  for (size_t i = 0; i < n; ++i) {
-    acp_polar_point p;
-    int st = ACP_ERR_INVALID;
-    polar_nan(&p);
-    if (mass && hp && tas)
-      st = acp_polar(ac, mass[i], hp[i], acp_opt(dtemp, i, 0.0), tas[i],
-                     acp_opt(load_factor, i, 1.0), &p);
-    if (st != ACP_OK) ++bad;
-    acp_put(mach ? mach + i : NULL, p.mach);
-    acp_put(cl ? cl + i : NULL, p.cl);
-    acp_put(cd0 ? cd0 + i : NULL, p.cd0);
-    acp_put(cd_induced ? cd_induced + i : NULL, p.cd_induced);
-    acp_put(cd_wave ? cd_wave + i : NULL, p.cd_wave);
-    acp_put(cd ? cd + i : NULL, p.cd);
-    acp_put(mach_critical ? mach_critical + i : NULL, p.mach_critical);
-  }
-  return bad;
-}

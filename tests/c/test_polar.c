@@ -339,15 +339,6 @@ static void test_drag_curve(void **state) {
   assert_int_equal(acp_drag_n(ac, 0, mass, hp, NULL, v, NULL, NULL, NULL, NULL, NULL, NULL, NULL,
                               NULL),
                    0);
-  double cl3[3], cd3[3];
-  acp_polar_point pp;
-  assert_int_equal(acp_polar_n(ac, 3, mass, hp, NULL, v, NULL, NULL, cl3, NULL, NULL, NULL, cd3,
-                               NULL),
-                   2);
-  assert_int_equal(acp_polar(ac, 5000, 0, 0, 70, 1, &pp), ACP_OK);
-  CHECK_CLOSE(cl3[0], pp.cl, 0, 0, "polar_n CL");
-  CHECK_CLOSE(cd3[0], pp.cd, 0, 0, "polar_n CD");
-  CHECK_NAN(cd3[1], "polar_n NaN mass");
   acp_aircraft_free(ac);
 }
 

@@ -148,16 +148,6 @@ ACP_API size_t acp_drag_n(const acp_aircraft *ac, size_t n, const double *mass, 
                           double *parasite, double *induced, double *wave, double *total);
 
 /**
- * Array form of acp_polar(): element i at mass[i], hp[i], dtemp[i] (NULL:
- * standard day), tas[i], load_factor[i] (NULL: 1). Outputs may be NULL.
- * @return the number of invalid elements (their outputs are NaN).
- */
-ACP_API size_t acp_polar_n(const acp_aircraft *ac, size_t n, const double *mass, const double *hp,
-                           const double *dtemp, const double *tas, const double *load_factor,
-                           double *mach, double *cl, double *cd0, double *cd_induced,
-                           double *cd_wave, double *cd, double *mach_critical);
-
-/**
  * The drag curve: acp_drag() at one mass, altitude and ISA deviation over
  * n true airspeeds tas[i]. Outputs may be NULL when not wanted.
  * @return the number of invalid elements (their outputs are NaN).
