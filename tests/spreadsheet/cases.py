@@ -1,0 +1,72 @@
+"""Test cases of the spreadsheet functions: the Calc test workbook is made from
+them (tests/spreadsheet/calc_headless.py) and so are the DLL's calls under wine
+(dll_wine.py). Expected values come from reference.py, never from here.
+
+A case is (function name, arguments); an argument is a number, a text, or a
+Ref to a cell or range of the test workbook (sheet "Aircraft" or "Inputs").
+"""
+
+import os
+from collections import namedtuple
+
+Ref = namedtuple("Ref", "sheet range")
+
+ROOT = os.path.normpath(os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", ".."))
+RJ_FILE = os.path.join(ROOT, "examples", "aircraft", "regional_jet.toml")
+TWIN_FILE = os.path.join(ROOT, "examples", "aircraft", "light_twin.toml")
+
+# Aircraft ranges on the sheet "Aircraft" (columns; rows 1..60, spare rows blank).
+AIRCRAFT_COLUMNS = {"RJ": 0, "TWIN": 3, "BLANK_VALUE": 6, "TEXT_VALUE": 9, "UNKNOWN_KEY": 12,
+                    "INCOMPLETE": 15, "OUT_OF_RANGE": 18}
+RJ, TWIN = Ref("Aircraft", "A1:B60"), Ref("Aircraft", "D1:E60")
+BLANK_VALUE, TEXT_VALUE = Ref("Aircraft", "G1:H60"), Ref("Aircraft", "J1:K60")
+UNKNOWN_KEY, INCOMPLETE = Ref("Aircraft", "M1:N60"), Ref("Aircraft", "P1:Q60")
+OUT_OF_RANGE = Ref("Aircraft", "S1:T60")
+# Sheet "Inputs": A1:A6 altitudes (ft), B1 blank, C1 text, D1:D3 CAS (kt), E1:F2 a 2x2 block.
+HP_COLUMN, BLANK, TEXT = Ref("Inputs", "A1:A6"), Ref("Inputs", "B1:B1"), Ref("Inputs", "C1")
+CAS_COLUMN, BLOCK = Ref("Inputs", "D1:D3"), Ref("Inputs", "E1:F2")
+INPUTS = {(r, 0): v for r, v in enumerate([0.0, 5000.0, 10000.0, 25000.0, 37000.0, 45000.0])}
+INPUTS.update({(0, 2): "abc", (0, 3): 150.0, (1, 3): 250.0, (2, 3): 320.0,
+               (0, 4): 1.0, (0, 5): 2.0, (1, 4): 3.0, (1, 5): 4.0})
+
+CASES = [
+    ("ACP_VERSION", []),
+    ("ACP_CONVERT", [1.0, "NM", "ft"]), ("ACP_CONVERT", [350.0, "FL", "m"]),
+    ("ACP_CONVERT", [15.0, "degC", "K"]), ("ACP_CONVERT", [1.0, "NM", "parsec"]),
+    ("ACP_ISA", [0.0, 0.0]), ("ACP_ISA", [37000.0, 15.0]), ("ACP_ISA", [-2000.0, -10.0]),
+    ("ACP_ISA", [HP_COLUMN, 10.0]), ("ACP_ISA", [400000.0, 0.0]), ("ACP_ISA", [TEXT, 0.0]),
+    ("ACP_ISA_TEMPERATURE", [11000.0, 5.0]), ("ACP_ISA_TEMPERATURE", [HP_COLUMN, 0.0]),
+    ("ACP_ISA_PRESSURE", [18000.0]), ("ACP_ISA_PRESSURE", [1e7]),
+    ("ACP_ISA_DENSITY", [8000.0, -5.0]), ("ACP_SOUND_SPEED", [35000.0, 0.0]),
+    ("ACP_ISA_DEVIATION", [-40.0, 30000.0]), ("ACP_OAT", [12.0, 30000.0]),
+    ("ACP_TOTAL_TEMPERATURE", [-45.0, 0.78, 0.98]), ("ACP_TOTAL_TEMPERATURE", [-45.0, 0.78, 1.5]),
+    ("ACP_PRESSURE_ALTITUDE", [250.0]), ("ACP_PRESSURE_ALTITUDE", [-5.0]),
+    ("ACP_PRESSURE_ALTITUDE_QNH", [3000.0, 998.0]), ("ACP_DENSITY_ALTITUDE", [5000.0, 25.0]),
+    ("ACP_CAS_TO_TAS", [250.0, 10000.0, 0.0]), ("ACP_CAS_TO_TAS", [280.0, 31000.0, -8.0]),
+    ("ACP_CAS_TO_TAS", [CAS_COLUMN, 20000.0, 0.0]), ("ACP_CAS_TO_TAS", [CAS_COLUMN, HP_COLUMN, 0.0]),
+    ("ACP_CAS_TO_TAS", [BLOCK, 1000.0, 0.0]), ("ACP_CAS_TO_TAS", [BLANK, 1000.0, 0.0]),
+    ("ACP_CAS_TO_TAS", ["250", 1000.0, 0.0]), ("ACP_CAS_TO_TAS", [-250.0, 1000.0, 0.0]),
+    ("ACP_TAS_TO_CAS", [450.0, 35000.0, 10.0]), ("ACP_CAS_TO_MACH", [300.0, 28000.0]),
+    ("ACP_MACH_TO_CAS", [0.78, 33000.0]), ("ACP_MACH_TO_TAS", [0.8, 39000.0, -3.0]),
+    ("ACP_TAS_TO_MACH", [470.0, 39000.0, 0.0]), ("ACP_CAS_TO_EAS", [320.0, 25000.0]),
+    ("ACP_CROSSOVER_ALTITUDE", [300.0, 0.78]), ("ACP_CROSSOVER_ALTITUDE", [280.0, 0.74]),
+    ("ACP_CROSSOVER_ALTITUDE", [100.0, 0.9]),
+    ("ACP_WIND_TRIANGLE", [420.0, 90.0, 330.0, 60.0]), ("ACP_WIND_TRIANGLE", [100.0, 0.0, 0.0, 150.0]),
+    ("ACP_AIRCRAFT_CHECK", [RJ]), ("ACP_AIRCRAFT_CHECK", [TWIN]),
+    ("ACP_AIRCRAFT_CHECK", [BLANK_VALUE]), ("ACP_AIRCRAFT_CHECK", [INCOMPLETE]),
+    ("ACP_AIRCRAFT_VALUE", [RJ, "aspect_ratio"]), ("ACP_AIRCRAFT_VALUE", [RJ, "induced_factor"]),
+    ("ACP_AIRCRAFT_VALUE", [TWIN, "oswald_effective"]), ("ACP_AIRCRAFT_VALUE", [RJ, "no_such_key"]),
+    ("ACP_DRAG", [RJ, 30000.0, 10000.0, 0.0, 280.0]), ("ACP_DRAG", [RJ, 28000.0, 35000.0, 5.0, 450.0]),
+    ("ACP_DRAG", [TWIN, 3200.0, 8000.0, 0.0, 170.0]), ("ACP_DRAG", [RJ, 30000.0, 10000.0, 0.0, 2000.0]),
+    ("ACP_DRAG", [BLANK_VALUE, 30000.0, 10000.0, 0.0, 280.0]),
+    ("ACP_DRAG", [TEXT_VALUE, 30000.0, 10000.0, 0.0, 280.0]),
+    ("ACP_DRAG", [UNKNOWN_KEY, 30000.0, 10000.0, 0.0, 280.0]),
+    ("ACP_DRAG", [INCOMPLETE, 30000.0, 10000.0, 0.0, 280.0]),
+    ("ACP_DRAG", [OUT_OF_RANGE, 30000.0, 10000.0, 0.0, 280.0]),
+    ("ACP_DRAG_TOTAL", [RJ, 30000.0, 10000.0, 0.0, CAS_COLUMN]),
+    ("ACP_SPEEDS_CAS", [RJ, 30000.0, 10000.0, 0.0]), ("ACP_SPEEDS_CAS", [RJ, 34000.0, 37000.0, 10.0]),
+    ("ACP_SPEEDS_TAS", [TWIN, 3000.0, 5000.0, 0.0]), ("ACP_SPEEDS_MACH", [RJ, 30000.0, 31000.0, 0.0]),
+    ("ACP_SPEEDS_CAS", [RJ, 30000.0, HP_COLUMN, 0.0]), ("ACP_SPEEDS_CAS", [RJ, 0.5, 10000.0, 0.0]),
+    ("ACP_LD_MAX", [RJ, 30000.0, 35000.0, 0.0]),
+    ("ACP_GLIDE", [RJ, 30000.0, 20000.0, 0.0]), ("ACP_GLIDE", [TWIN, 3000.0, 8000.0, 0.0]),
+]
