@@ -88,6 +88,7 @@ def main():
                            env=env, timeout=240, cwd=a.dir)
     finally:
         subprocess.run([a.wineserver, "-k"], env=env, capture_output=True)
+        shutil.rmtree(a.prefix, ignore_errors=True)   # about 700 MB, made anew each run
     lines = [l for l in r.stdout.splitlines() if l.strip()]
     failed, passed, worst = [], 0, {"closed": 0.0, "search": 0.0}
     got = {}
