@@ -16,5 +16,8 @@
 #include "acperf/atmosphere.h"
 #include "acperf/airspeed.h"
 #include "acperf/friction.h"
+#include "acperf/aircraft.h"
+#include "acperf/polar.h"
+#include "acperf/speeds.h"
 
 #endif /* ACPERF_H */

@@ -46,3 +46,27 @@ double acp_skin_friction(double reynolds, double mach, double laminar_fraction, 
   return laminar_fraction * acp_skin_friction_laminar(reynolds) +
          (1.0 - laminar_fraction) * acp_skin_friction_turbulent(re_turb, mach);
 }
+
+double acp_form_factor_surface(double thickness_ratio, double max_thickness_position,
+                               double sweep_max_thickness, double mach) {
+  if (!acp_in_range(thickness_ratio, 0.0, 0.4) || !acp_in_range(max_thickness_position, 0.1, 0.7) ||
+      !acp_in_range(sweep_max_thickness, 0.0, 70.0 * 3.14159265358979323846 / 180.0) ||
+      !acp_in_range(mach, 0.0, 1.0))
+    return ACP_NAN;
+  const double tc = thickness_ratio;
+  const double shape = 1.0 + 0.6 / max_thickness_position * tc + 100.0 * tc * tc * tc * tc;
+  /* Raymer's Mach factor, held at 1 below M = (1/1.34)^(1/0.18) = 0.19673. */
+  const double mach_factor = fmax(1.0, 1.34 * pow(mach, 0.18));
+  return shape * mach_factor * pow(cos(sweep_max_thickness), 0.28);
+}
+
+double acp_form_factor_body(double fineness_ratio) {
+  if (!acp_in_range(fineness_ratio, 1.0, 100.0)) return ACP_NAN;
+  const double f = fineness_ratio;
+  return 1.0 + 60.0 / (f * f * f) + f / 400.0;
+}
+
+double acp_form_factor_nacelle(double fineness_ratio) {
+  if (!acp_in_range(fineness_ratio, 1.0, 100.0)) return ACP_NAN;
+  return 1.0 + 0.35 / fineness_ratio;
+}

@@ -1,7 +1,7 @@
 /**
  * @file acperf/friction.h
  * @brief Flat-plate skin-friction coefficients: laminar, turbulent, mixed,
- *        and the surface-roughness cutoff Reynolds number.
+ *        and the surface-roughness cutoff Reynolds number; component form factors.
  *
  * These are the building blocks of the component drag build-up: the
  * friction coefficient Cf of a flat plate of the component's characteristic
@@ -82,6 +82,44 @@ ACP_API double acp_roughness_cutoff_reynolds(double length, double roughness, do
  */
 ACP_API double acp_skin_friction(double reynolds, double mach, double laminar_fraction,
                                  double length, double roughness);
+
+/**
+ * Form factor of a lifting surface (wing, tail, strut, pylon): Raymer,
+ * "Aircraft Design: A Conceptual Approach", component build-up method,
+ * eq. 12.30 of the 4th edition:
+ * FF = [1 + 0.6/(x/c)_m (t/c) + 100 (t/c)^4] [1.34 M^0.18 (cos L_m)^0.28].
+ *
+ * @param thickness_ratio        t/c, 0 to 0.4
+ * @param max_thickness_position (x/c)_m, chordwise position of maximum thickness, 0.1 to 0.7
+ * @param sweep_max_thickness    sweep of the maximum-thickness line L_m (rad), 0 to 70 deg
+ * @param mach                   Mach number, 0 to 1
+ * @return FF; NaN on invalid input.
+ *
+ * Note: the Mach factor 1.34 M^0.18 is below 1 under M = 0.197 and goes
+ * to 0 at M = 0, which would make a surface's form factor vanish at low
+ * speed. The library holds the factor at 1 below M = (1/1.34)^(1/0.18) =
+ * 0.19673 (continuous there; project's choice, docs/methods/drag.md).
+ */
+ACP_API double acp_form_factor_surface(double thickness_ratio, double max_thickness_position,
+                                       double sweep_max_thickness, double mach);
+
+/**
+ * Form factor of a fuselage or smooth canopy: FF = 1 + 60/f^3 + f/400,
+ * f = length/diameter (Raymer, eq. 12.31 of the 4th edition).
+ *
+ * @param fineness_ratio f, 1 to 100
+ * @return FF; NaN on invalid input.
+ */
+ACP_API double acp_form_factor_body(double fineness_ratio);
+
+/**
+ * Form factor of a nacelle or smooth external store: FF = 1 + 0.35/f
+ * (Raymer, eq. 12.32 of the 4th edition).
+ *
+ * @param fineness_ratio f = length/diameter, 1 to 100
+ * @return FF; NaN on invalid input.
+ */
+ACP_API double acp_form_factor_nacelle(double fineness_ratio);
 
 ACP_END_DECLS
 

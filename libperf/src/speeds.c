@@ -1,0 +1,300 @@
+/* Characteristic speeds, gliding and speed stability, found numerically on the
+   full drag model (method: acperf/speeds.h and docs/methods/drag.md). */
+#include "acperf/speeds.h"
+
+#include "acperf/airspeed.h"
+#include "acperf/atmosphere.h"
+#include "acperf/polar.h"
+#include "acperf/status.h"
+#include "aircraft_internal.h"
+#include "internal.h"
+
+#define GRID 121          /* tabulated speeds of the coarse search */
+#define CL_SEARCH 5.0     /* the search starts at the speed of this lift coefficient */
+#define SLOPE_STEP 1e-5   /* relative step of the central-difference slope */
+#define BISECT_TOL 1e-13  /* relative width at which the bisection stops */
+#define GLIDE_ITER 60     /* fixed-point steps of the glide angle, at most */
+
+/* What a search minimises. */
+enum objective { OBJ_DRAG, OBJ_POWER, OBJ_RANGE, OBJ_GLIDE_ANGLE, OBJ_SINK };
+
+typedef struct {
+  const acp_aircraft *ac;
+  acp_atmos atm;
+  double weight; /* N */
+  double vlo, vhi;
+} search;
+
+/* Steady glide angle at TAS v: W sin g = D(lift = W cos g). NaN when the
+   drag exceeds the weight or the iteration does not settle. */
+static double glide_angle(const search *s, double v) {
+  double g = 0.0;
+  for (int i = 0; i < GLIDE_ITER; ++i) {
+    const double d = polar_drag(s->ac, &s->atm, s->weight * cos(g), v);
+    if (!(d / s->weight < 1.0)) return ACP_NAN;
+    const double next = asin(d / s->weight);
+    if (fabs(next - g) <= 1e-15) return next;
+    g = next;
+  }
+  return ACP_NAN;
+}
+
+static double objective_at(const search *s, enum objective obj, double v) {
+  switch (obj) {
+  case OBJ_DRAG: return polar_drag(s->ac, &s->atm, s->weight, v);
+  case OBJ_POWER: return polar_drag(s->ac, &s->atm, s->weight, v) * v;
+  case OBJ_RANGE: return polar_drag(s->ac, &s->atm, s->weight, v) / v;
+  case OBJ_GLIDE_ANGLE: return glide_angle(s, v);
+  case OBJ_SINK: return v * sin(glide_angle(s, v));
+  }
+  return ACP_NAN;
+}
+
+static double slope_at(const search *s, enum objective obj, double v) {
+  const double h = SLOPE_STEP * v;
+  return (objective_at(s, obj, v + h) - objective_at(s, obj, v - h)) / (2.0 * h);
+}
+
+/* The speed minimising obj between s->vlo and s->vhi; ACP_ERR_RANGE when the
+   least tabulated value is at an end or nothing could be evaluated. */
+static int minimise(const search *s, enum objective obj, double *vbest) {
+  *vbest = ACP_NAN;
+  const double ratio = pow(s->vhi / s->vlo, 1.0 / (GRID - 1));
+  double best = INFINITY;
+  int ibest = -1;
+  for (int i = 0; i < GRID; ++i) {
+    const double v = i == GRID - 1 ? s->vhi : s->vlo * pow(ratio, i);
+    const double f = objective_at(s, obj, v);
+    if (f < best) {
+      best = f;
+      ibest = i;
+    }
+  }
+  if (ibest <= 0 || ibest >= GRID - 1) return ACP_ERR_RANGE;
+  double lo = s->vlo * pow(ratio, ibest - 1), hi = s->vlo * pow(ratio, ibest + 1);
+  for (int k = 0; k < 200 && hi - lo > BISECT_TOL * hi; ++k) {
+    const double mid = 0.5 * (lo + hi);
+    const double d = slope_at(s, obj, mid);
+    if (isnan(d)) return ACP_ERR_RANGE;
+    if (d > 0.0)
+      hi = mid;
+    else
+      lo = mid;
+  }
+  *vbest = 0.5 * (lo + hi);
+  return ACP_OK;
+}
+
+/* Checks and the search interval at a mass and altitude. */
+static int setup(search *s, const acp_aircraft *ac, double mass, double hp, double dtemp) {
+  const int st = polar_condition(ac, mass, hp, dtemp, 1.0, 1.0, &s->atm);
+  if (st != ACP_OK) return st;
+  s->ac = ac;
+  s->weight = mass * ACP_G0;
+  s->vlo = sqrt(2.0 * s->weight / (s->atm.density * ac->v[AK_WING_AREA] * CL_SEARCH));
+  s->vhi = ACP_POLAR_MACH_MAX * s->atm.sound_speed * (1.0 - 1e-12);
+  return s->vlo < 0.5 * s->vhi ? ACP_OK : ACP_ERR_RANGE;
+}
+
+static void speeds_nan(acp_speed_set *out) {
+  out->vmd = out->vmp = out->vmr = out->vs1g = out->ld_max = ACP_NAN;
+}
+
+static int first_error(int a, int b) { return a != ACP_OK ? a : b; }
+
+int acp_speeds(const acp_aircraft *ac, double mass, double hp, double dtemp,
+               acp_speed_set *out) {
+  if (!out) return ACP_ERR_INVALID;
+  speeds_nan(out);
+  search s;
+  int st = setup(&s, ac, mass, hp, dtemp);
+  if (st != ACP_OK) return st;
+  st = first_error(st, minimise(&s, OBJ_DRAG, &out->vmd));
+  st = first_error(st, minimise(&s, OBJ_POWER, &out->vmp));
+  st = first_error(st, minimise(&s, OBJ_RANGE, &out->vmr));
+  if (!isnan(out->vmd)) out->ld_max = s.weight / polar_drag(ac, &s.atm, s.weight, out->vmd);
+  const double cl_max = ac->v[AK_CL_MAX];
+  if (!isnan(cl_max))
+    out->vs1g = sqrt(2.0 * s.weight / (s.atm.density * ac->v[AK_WING_AREA] * cl_max));
+  return st;
+}
+
+/* Convert the four speeds of a set from TAS: kind 1 CAS, 2 Mach. */
+static void convert(acp_speed_set *v, double hp, double dtemp, int kind) {
+  double *f[4] = {&v->vmd, &v->vmp, &v->vmr, &v->vs1g};
+  for (int i = 0; i < 4; ++i)
+    if (!isnan(*f[i]))
+      *f[i] = kind == 1 ? acp_tas_to_cas(*f[i], hp, dtemp) : acp_tas_to_mach(*f[i], hp, dtemp);
+}
+
+int acp_speeds_cas(const acp_aircraft *ac, double mass, double hp, double dtemp,
+                   acp_speed_set *out) {
+  const int st = acp_speeds(ac, mass, hp, dtemp, out);
+  if (out) convert(out, hp, dtemp, 1);
+  return st;
+}
+
+int acp_speeds_mach(const acp_aircraft *ac, double mass, double hp, double dtemp,
+                    acp_speed_set *out) {
+  const int st = acp_speeds(ac, mass, hp, dtemp, out);
+  if (out) convert(out, hp, dtemp, 2);
+  return st;
+}
+
+static size_t speeds_array(int kind, const acp_aircraft *ac, size_t n, const double *mass,
+                           const double *hp, const double *dtemp, double *vmd, double *vmp,
+                           double *vmr, double *vs1g, double *ld_max) {
+  size_t bad = 0;
+  for (size_t i = 0; i < n; ++i) {
+    acp_speed_set v;
+    int st = ACP_ERR_INVALID;
+    speeds_nan(&v);
+    if (mass && hp) {
+      const double dt = acp_opt(dtemp, i, 0.0);
+      st = acp_speeds(ac, mass[i], hp[i], dt, &v);
+      if (kind) convert(&v, hp[i], dt, kind);
+    }
+    if (st != ACP_OK) ++bad;
+    acp_put(vmd ? vmd + i : NULL, v.vmd);
+    acp_put(vmp ? vmp + i : NULL, v.vmp);
+    acp_put(vmr ? vmr + i : NULL, v.vmr);
+    acp_put(vs1g ? vs1g + i : NULL, v.vs1g);
+    acp_put(ld_max ? ld_max + i : NULL, v.ld_max);
+  }
+  return bad;
+}
+
+size_t acp_speeds_n(const acp_aircraft *ac, size_t n, const double *mass, const double *hp,
+                    const double *dtemp, double *vmd, double *vmp, double *vmr, double *vs1g,
+                    double *ld_max) {
+  return speeds_array(0, ac, n, mass, hp, dtemp, vmd, vmp, vmr, vs1g, ld_max);
+}
+
+size_t acp_speeds_cas_n(const acp_aircraft *ac, size_t n, const double *mass, const double *hp,
+                        const double *dtemp, double *vmd, double *vmp, double *vmr,
+                        double *vs1g, double *ld_max) {
+  return speeds_array(1, ac, n, mass, hp, dtemp, vmd, vmp, vmr, vs1g, ld_max);
+}
+
+size_t acp_speeds_mach_n(const acp_aircraft *ac, size_t n, const double *mass, const double *hp,
+                         const double *dtemp, double *vmd, double *vmp, double *vmr,
+                         double *vs1g, double *ld_max) {
+  return speeds_array(2, ac, n, mass, hp, dtemp, vmd, vmp, vmr, vs1g, ld_max);
+}
+
+/* ---- gliding ---------------------------------------------------------------- */
+
+static void glide_nan(acp_glide_set *g) {
+  g->best_glide_ratio = g->best_glide_speed = g->best_glide_sink_rate = ACP_NAN;
+  g->min_sink_speed = g->min_sink_rate = ACP_NAN;
+}
+
+int acp_glide(const acp_aircraft *ac, double mass, double hp, double dtemp, acp_glide_set *out) {
+  if (!out) return ACP_ERR_INVALID;
+  glide_nan(out);
+  search s;
+  int st = setup(&s, ac, mass, hp, dtemp);
+  if (st != ACP_OK) return st;
+  double v;
+  int st1 = minimise(&s, OBJ_GLIDE_ANGLE, &v);
+  if (st1 == ACP_OK) {
+    const double g = glide_angle(&s, v);
+    if (isnan(g)) {
+      st1 = ACP_ERR_NO_CONVERGENCE;
+    } else {
+      out->best_glide_speed = v;
+      out->best_glide_ratio = 1.0 / tan(g);
+      out->best_glide_sink_rate = v * sin(g);
+    }
+  }
+  int st2 = minimise(&s, OBJ_SINK, &v);
+  if (st2 == ACP_OK) {
+    const double g = glide_angle(&s, v);
+    if (isnan(g)) {
+      st2 = ACP_ERR_NO_CONVERGENCE;
+    } else {
+      out->min_sink_speed = v;
+      out->min_sink_rate = v * sin(g);
+    }
+  }
+  return first_error(st1, st2);
+}
+
+size_t acp_glide_n(const acp_aircraft *ac, size_t n, const double *mass, const double *hp,
+                   const double *dtemp, double *best_glide_ratio, double *best_glide_speed,
+                   double *best_glide_sink_rate, double *min_sink_speed, double *min_sink_rate) {
+  size_t bad = 0;
+  for (size_t i = 0; i < n; ++i) {
+    acp_glide_set g;
+    int st = ACP_ERR_INVALID;
+    glide_nan(&g);
+    if (mass && hp) st = acp_glide(ac, mass[i], hp[i], acp_opt(dtemp, i, 0.0), &g);
+    if (st != ACP_OK) ++bad;
+    acp_put(best_glide_ratio ? best_glide_ratio + i : NULL, g.best_glide_ratio);
+    acp_put(best_glide_speed ? best_glide_speed + i : NULL, g.best_glide_speed);
+    acp_put(best_glide_sink_rate ? best_glide_sink_rate + i : NULL, g.best_glide_sink_rate);
+    acp_put(min_sink_speed ? min_sink_speed + i : NULL, g.min_sink_speed);
+    acp_put(min_sink_rate ? min_sink_rate + i : NULL, g.min_sink_rate);
+  }
+  return bad;
+}
+
+/* ---- speed stability ------------------------------------------------------- */
+
+int acp_speed_stability(const acp_aircraft *ac, double mass, double hp, double dtemp, double tas,
+                        acp_stability *out) {
+  if (!out) return ACP_ERR_INVALID;
+  out->slope = out->vmd = out->stable = ACP_NAN;
+  search s;
+  int st = setup(&s, ac, mass, hp, dtemp);
+  if (st != ACP_OK) return st;
+  if (!isfinite(tas)) return ACP_ERR_INVALID;
+  if (!(tas > 0.0)) return ACP_ERR_RANGE;
+  const double slope = slope_at(&s, OBJ_DRAG, tas);
+  if (isnan(slope)) return ACP_ERR_RANGE;
+  out->slope = slope;
+  out->stable = slope > 0.0 ? 1.0 : slope < 0.0 ? -1.0 : 0.0;
+  return minimise(&s, OBJ_DRAG, &out->vmd);
+}
+
+size_t acp_speed_stability_n(const acp_aircraft *ac, size_t n, const double *mass,
+                             const double *hp, const double *dtemp, const double *tas,
+                             double *slope, double *vmd, double *stable) {
+  size_t bad = 0;
+  for (size_t i = 0; i < n; ++i) {
+    acp_stability r = {ACP_NAN, ACP_NAN, ACP_NAN};
+    int st = ACP_ERR_INVALID;
+    if (mass && hp && tas)
+      st = acp_speed_stability(ac, mass[i], hp[i], acp_opt(dtemp, i, 0.0), tas[i], &r);
+    if (st != ACP_OK) ++bad;
+    acp_put(slope ? slope + i : NULL, r.slope);
+    acp_put(vmd ? vmd + i : NULL, r.vmd);
+    acp_put(stable ? stable + i : NULL, r.stable);
+  }
+  return bad;
+}
+
+size_t acp_speed_stability_boundary_n(const acp_aircraft *ac, size_t n, const double *mass,
+                                      const double *hp, const double *dtemp, double *vmd_tas,
+                                      double *vmd_cas, double *vmd_mach) {
+  size_t bad = 0;
+  for (size_t i = 0; i < n; ++i) {
+    double v = ACP_NAN, cas = ACP_NAN, mach = ACP_NAN;
+    int st = ACP_ERR_INVALID;
+    if (mass && hp) {
+      search s;
+      const double dt = acp_opt(dtemp, i, 0.0);
+      st = setup(&s, ac, mass[i], hp[i], dt);
+      if (st == ACP_OK) st = minimise(&s, OBJ_DRAG, &v);
+      if (st == ACP_OK) {
+        cas = acp_tas_to_cas(v, hp[i], dt);
+        mach = acp_tas_to_mach(v, hp[i], dt);
+      }
+    }
+    if (st != ACP_OK) ++bad;
+    acp_put(vmd_tas ? vmd_tas + i : NULL, v);
+    acp_put(vmd_cas ? vmd_cas + i : NULL, cas);
+    acp_put(vmd_mach ? vmd_mach + i : NULL, mach);
+  }
+  return bad;
+}
