@@ -16,6 +16,7 @@
 #include "acperf/atmosphere.h"
 #include "acperf/airspeed.h"
 #include "acperf/friction.h"
+#include "acperf/schedule.h"
 #include "acperf/aircraft.h"
 #include "acperf/polar.h"
 #include "acperf/speeds.h"
