@@ -7,6 +7,7 @@
 #include <stdlib.h>
 #include <string.h>
 
+#include "acperf/polar.h"
 #include "acperf/status.h"
 #include "aircraft_internal.h"
 #include "internal.h"
@@ -155,11 +156,11 @@ static int check_value(const ac_keydef *d, const char *key, double value, char *
     return ACP_ERR_INVALID;
   }
   if ((d->flags & KF_INTEGER) && value != floor(value)) {
-    msg(err, errlen, "key '%s': %.17g is not a whole number", key, value);
+    msg(err, errlen, "key '%s': %.15g is not a whole number", key, value);
     return ACP_ERR_INVALID;
   }
   if (!acp_in_range(value, d->lo, d->hi)) {
-    msg(err, errlen, "key '%s': %.17g%s%s is outside the valid range %.17g to %.17g%s%s", key,
+    msg(err, errlen, "key '%s': %.15g%s%s is outside the valid range %.15g to %.15g%s%s", key,
         value, *d->unit ? " " : "", d->unit, d->lo, d->hi, *d->unit ? " " : "", d->unit);
     return ACP_ERR_RANGE;
   }
@@ -430,6 +431,13 @@ int ac_check(const acp_aircraft *ac, char *err, size_t errlen) {
   const double ar = ac->v[AK_SPAN] * ac->v[AK_SPAN] / ac->v[AK_WING_AREA];
   if (!acp_in_range(ar, 0.5, 50.0)) {
     msg(err, errlen, "aspect ratio span^2/wing_area = %.6g is outside 0.5 to 50", ar);
+    return ACP_ERR_INVALID;
+  }
+  /* Without 'oswald' the polar uses the estimate, which covers aspect ratios
+     1 to 30 only: outside, k would be NaN behind an ACP_OK. */
+  if (isnan(ac->v[AK_OSWALD]) && isnan(acp_oswald_estimate(ar, ac_value(ac, AK_SWEEP_LE)))) {
+    msg(err, errlen, "aspect ratio %.6g is outside the Oswald estimate's 1 to 30: give 'oswald'",
+        ar);
     return ACP_ERR_INVALID;
   }
   if (2.0 * ac->v[AK_WINGLET_HEIGHT] > ac->v[AK_SPAN]) {

@@ -25,15 +25,13 @@ typedef struct {
 } parser;
 
 static int fail(parser *p, unsigned line, const char *fmt, ...) {
+  va_list ap;
+  va_start(ap, fmt);
   if (p->err && p->errlen > 0) {
-    int n = line ? snprintf(p->err, p->errlen, "line %u: ", line) : 0;
-    if (n >= 0 && (size_t)n < p->errlen) {
-      va_list ap;
-      va_start(ap, fmt);
-      vsnprintf(p->err + n, p->errlen - (size_t)n, fmt, ap);
-      va_end(ap);
-    }
+    const int n = line ? snprintf(p->err, p->errlen, "line %u: ", line) : 0;
+    if (n >= 0 && (size_t)n < p->errlen) vsnprintf(p->err + n, p->errlen - (size_t)n, fmt, ap);
   }
+  va_end(ap);
   return ACP_ERR_PARSE;
 }
 

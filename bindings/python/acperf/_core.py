@@ -1,0 +1,260 @@
+"""Machinery of the Pythonic layer: one C function pair -> one Python function.
+
+Each public function of the package is made by :func:`bind` from a scalar C
+function (always) and its array form ``_n`` (when libacperf has one). The
+generated function
+
+* calls the scalar C function directly when every argument is a Python or
+  numpy float/int (the fast path: one SWIG ``-builtin`` call; a failure raises
+  :class:`AcperfError` from C with the status text of ``acp_strerror``);
+* otherwise converts the arguments to float64 numpy arrays (lists, tuples,
+  numpy arrays of any dtype or stride, pandas Series), broadcasts them against
+  each other, calls the array form once on contiguous memory, reshapes the
+  outputs to the broadcast shape, gives them the index of a pandas Series
+  input, and warns with :class:`AcperfWarning` when points were invalid (their
+  outputs are NaN).
+
+This module converts shapes, units and errors only; every number comes from
+libacperf. To bind a new C function, add one :func:`bind` line to the module
+of its header (see atmosphere.py); a model argument such as an aircraft goes
+in ``models`` and is passed through unbroadcast.
+"""
+
+import collections
+import inspect
+import warnings
+
+import numpy as np
+
+from . import capi as _c
+
+AcperfError = _c.AcperfError
+AcperfError.__module__ = "acperf"
+
+
+class AcperfWarning(RuntimeWarning):
+    """Some points of an array call were invalid; their results are NaN."""
+
+
+class Result:
+    """Mixin of the named results (a namedtuple of floats or of arrays)."""
+
+    __slots__ = ()
+
+    def to_dict(self):
+        """The fields as a dict, in field order."""
+        return dict(zip(self._fields, self))
+
+    def to_frame(self):
+        """The fields as the columns of a pandas DataFrame (array results)."""
+        import pandas as pd
+
+        data = self.to_dict()
+        index = next((v.index for v in data.values() if isinstance(v, pd.Series)), None)
+        if all(np.ndim(v) == 0 for v in data.values()):
+            return pd.DataFrame({k: [v] for k, v in data.items()})
+        return pd.DataFrame({k: np.asarray(v).ravel() for k, v in data.items()}, index=index)
+
+
+def result_type(name, fields, doc):
+    """A named result: a namedtuple whose fields are the C struct's field names."""
+    base = collections.namedtuple(name, fields)
+    return type(name, (Result, base), {"__slots__": (), "__doc__": doc, "__module__": "acperf"})
+
+
+def struct_fields(swig_type):
+    """Field names of a SWIG-wrapped C struct (unordered set)."""
+    return {k for k, v in vars(swig_type).items()
+            if inspect.isdatadescriptor(v) and not k.startswith("_") and k not in ("this", "thisown")}
+
+
+_NO_DEFAULT = inspect.Parameter.empty
+
+# The generated function: the fast scalar path, else the array path.
+_TEMPLATE = """\
+def {name}({signature}):
+    try:
+        return _finish(_scalar({args}))
+    except TypeError:
+        return _array({args})
+"""
+_TEMPLATE_PLAIN = """\
+def {name}({signature}):
+    try:
+        return _scalar({args})
+    except TypeError:
+        return _array({args})
+"""
+
+
+def model_handle(model):
+    """The C handle of a model argument: an object's `_handle` (acperf.Aircraft), or
+    a raw SWIG pointer as it is."""
+    return getattr(model, "_handle", model)
+
+
+def bind(name, scalar, array=None, params=(), defaults=None, outputs=None, result=None,
+         models=(), nullable=("dtemp", "load_factor"), array_extra=(), module="acperf"):
+    """Make the Python function `name` from a scalar C function and its array form.
+
+    scalar    SWIG function of the scalar C form (raises AcperfError on failure)
+    array     SWIG function of the `_n` form, or None when the C library has none
+              (then the array path calls the scalar function per point)
+    params    parameter names, exactly as in the C header
+    defaults  {param: default} for trailing parameters (dtemp=0.0)
+    outputs   output names of a multi-output function, in the order of the
+              C out-pointers / `_n` outputs; None for a single output
+    result    named result type for multi-output functions
+    models    leading parameters passed through as they are (models, handles)
+    nullable  parameters the array form reads as "standard" when NULL: passed as
+              None when given as the scalar standard value (dtemp 0, load_factor 1)
+    array_extra  trailing arguments of the array form that the scalar form has
+              not (None for an optional input such as load_factor)
+    """
+    defaults = dict(defaults or {})
+    sig_parts = []
+    for p in params:
+        sig_parts.append(f"{p}={defaults[p]!r}" if p in defaults else p)
+    signature = ", ".join(sig_parts)
+    nmodel = len(models)
+    if tuple(params[:nmodel]) != tuple(models):
+        raise ValueError(f"{name}: model parameters {models} must come first")
+    args = ", ".join([f"_model({p})" for p in params[:nmodel]] + list(params[nmodel:]))
+    vec_params = tuple(params[nmodel:])
+    nulls = tuple(i for i, p in enumerate(vec_params) if p in nullable)
+
+    if result is not None and outputs is None:
+        outputs = result._fields
+    if result is None and outputs is not None:
+        raise ValueError(f"{name}: several outputs need a result type")
+
+    def array_path(*values):
+        return _array_call(name, scalar, array, values[:nmodel], values[nmodel:], vec_params,
+                           nulls, outputs, result, tuple(array_extra))
+
+    if result is None:
+        code = _TEMPLATE_PLAIN
+        namespace = {"_scalar": scalar, "_array": array_path, "_model": model_handle}
+    else:
+        def finish(value, _result=result, _fields=result._fields):
+            if isinstance(value, list):  # several out-pointers
+                return _result(*value)
+            return _result(*(getattr(value, f) for f in _fields))  # an output struct
+        code = _TEMPLATE
+        namespace = {"_scalar": scalar, "_array": array_path, "_finish": finish,
+                     "_model": model_handle}
+    exec(code.format(name=name, signature=signature, args=args), namespace)
+    fn = namespace[name]
+    fn.__module__ = module
+    fn.__qualname__ = name
+    fn.__doc__ = _docstring(name, scalar, array, outputs, result)
+    fn.c_function = scalar.__name__
+    fn.c_array_function = array.__name__ if array is not None else None
+    fn.c_models = tuple(models)
+    return fn
+
+
+def _docstring(name, scalar, array, outputs, result):
+    how = ("Array form: one call of {0} on the whole broadcast array.".format(array.__name__)
+           if array is not None else
+           "Array form: libacperf has no array form of this function yet; arrays are "
+           "evaluated point by point through {0}.".format(scalar.__name__))
+    out = (f"Returns a {result.__name__} ({', '.join(result._fields)})."
+           if result is not None else "Returns a float, or an array of the broadcast shape.")
+    head = (f"{name}: Python form of {scalar.__name__}() in libacperf.\n\n"
+            "Arguments: scalars, lists, numpy arrays (any real dtype or stride) or pandas\n"
+            "Series, broadcast against each other, in the SI units of the C function.\n"
+            f"{out} A pandas Series input gives Series outputs with its index.\n"
+            "A scalar call that fails raises acperf.AcperfError; an array call puts NaN\n"
+            f"where a point is invalid and warns with acperf.AcperfWarning.\n{how}\n\n"
+            "Results are engineering estimates, not approved flight-manual data.\n\n"
+            "From the C header:\n")
+    return head + (scalar.__doc__ or "")
+
+
+def _series_index(values):
+    for v in values:
+        if hasattr(v, "index") and hasattr(v, "to_numpy") and np.ndim(v) == 1:
+            return v.index
+    return None
+
+
+def _as_float_array(value, param, fname):
+    try:
+        if value is None or isinstance(value, (str, bytes)):
+            raise TypeError(param)
+        return np.asarray(value, dtype=np.float64)
+    except (TypeError, ValueError) as exc:
+        raise TypeError(f"{fname}: {param} must be a real number or an array of them "
+                        f"(got {type(value).__name__})") from exc
+
+
+_STANDARD = {"dtemp": 0.0, "load_factor": 1.0}  # what a NULL array means in the C API
+
+
+def _array_call(fname, scalar, array, models, values, params, nulls, outputs, result,
+                array_extra=()):
+    arrays = [_as_float_array(v, p, fname) for v, p in zip(values, params)]
+    shape = np.broadcast_shapes(*(a.shape for a in arrays))
+    if shape == ():
+        # numpy scalars, 0-d arrays: a scalar call, with its exception.
+        out = scalar(*models, *(float(a) for a in arrays))
+        if result is None:
+            return out
+        if isinstance(out, list):
+            return result(*out)
+        return result(*(getattr(out, f) for f in result._fields))
+    n = int(np.prod(shape))
+    if array is not None:
+        flat = []
+        for i, a in enumerate(arrays):
+            if i in nulls and a.ndim == 0 and a == _STANDARD[params[i]]:
+                flat.append(None)  # the C array form reads NULL as the standard value
+                continue
+            if a.shape != shape:
+                a = np.broadcast_to(a, shape)
+            flat.append(np.ascontiguousarray(a).reshape(n))
+        res = array(*models, *flat, *array_extra)
+        bad, outs = res[0], res[1:]
+    else:
+        bad, outs = _pointwise(scalar, models, arrays, shape, n, outputs)
+    if bad:
+        warnings.warn(f"{fname}: {bad} of {n} points invalid (argument invalid or outside "
+                      "the model's valid range); their results are NaN",
+                      AcperfWarning, stacklevel=4)
+    index = _series_index(values)
+    names = outputs if outputs is not None else (None,)
+    shaped = []
+    for o, oname in zip(outs, names):
+        o = o.reshape(shape)
+        if index is not None and len(shape) == 1 and len(index) == shape[0]:
+            import pandas as pd
+
+            o = pd.Series(o, index=index, name=oname if oname is not None else fname)
+        shaped.append(o)
+    if result is None:
+        return shaped[0]
+    return result(*shaped)
+
+
+def _pointwise(scalar, models, arrays, shape, n, outputs):
+    """Array path of a function without a C array form: one scalar call per point."""
+    flat = [np.broadcast_to(a, shape).reshape(n) for a in arrays]
+    nout = 1 if outputs is None else len(outputs)
+    outs = [np.full(n, np.nan) for _ in range(nout)]
+    bad = 0
+    for i in range(n):
+        try:
+            r = scalar(*models, *(float(a[i]) for a in flat))
+        except AcperfError:
+            bad += 1
+            continue
+        if nout == 1:
+            outs[0][i] = r
+        elif isinstance(r, list):
+            for o, v in zip(outs, r):
+                o[i] = v
+        else:
+            for o, f in zip(outs, outputs):
+                o[i] = getattr(r, f)
+    return bad, outs
