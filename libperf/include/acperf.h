@@ -17,6 +17,7 @@
 #include "acperf/airspeed.h"
 #include "acperf/friction.h"
 #include "acperf/schedule.h"
+#include "acperf/propulsion.h"
 #include "acperf/aircraft.h"
 #include "acperf/polar.h"
 #include "acperf/speeds.h"
