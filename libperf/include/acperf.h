@@ -18,6 +18,7 @@
 #include "acperf/friction.h"
 #include "acperf/schedule.h"
 #include "acperf/propulsion.h"
+#include "acperf/climb.h"
 #include "acperf/aircraft.h"
 #include "acperf/polar.h"
 #include "acperf/speeds.h"

@@ -67,7 +67,7 @@ typedef struct {
   double buffet_altitude;      /**< highest altitude with a 1.3 g margin to buffet at cruise_mach */
   double max_cruise_altitude;  /**< lowest of max_climb_altitude, buffet_altitude, max_altitude */
   double optimum_altitude;     /**< altitude of the greatest specific air range at cruise_mach */
-} acp_ceilings;
+} acp_ceiling_set;
 
 /**
  * The climb at a point of the climb schedule (maximum-climb thrust).
@@ -133,7 +133,7 @@ ACP_API int acp_descent_trace(const acp_aircraft *ac, double mass, double hp_sta
  *         ACP_ERR_INVALID; ACP_ERR_RANGE; ACP_ERR_THRUST (no climb at all at
  *         the lowest altitude).
  */
-ACP_API int acp_ceilings(const acp_aircraft *ac, double mass, double dtemp, acp_ceilings *out);
+ACP_API int acp_ceilings(const acp_aircraft *ac, double mass, double dtemp, acp_ceiling_set *out);
 
 ACP_END_DECLS
 
