@@ -230,6 +230,31 @@ static int key_value(parser *p, const char *s, size_t n, unsigned line) {
   return assign(p, key, NULL, value, line);
 }
 
+/* Length of the well-formed UTF-8 sequence at s[0..n) (s[0] >= 0x80), 0 when
+   ill-formed: overlong forms, surrogates and code points above U+10FFFF are
+   rejected as Python's UTF-8 decoder (and so tomllib) rejects them. */
+static size_t utf8_length(const unsigned char *s, size_t n) {
+  size_t len;
+  unsigned lo = 0x80, hi = 0xBF;
+  if (s[0] >= 0xC2 && s[0] <= 0xDF) {
+    len = 2;
+  } else if (s[0] >= 0xE0 && s[0] <= 0xEF) {
+    len = 3;
+    if (s[0] == 0xE0) lo = 0xA0;
+    if (s[0] == 0xED) hi = 0x9F;
+  } else if (s[0] >= 0xF0 && s[0] <= 0xF4) {
+    len = 4;
+    if (s[0] == 0xF0) lo = 0x90;
+    if (s[0] == 0xF4) hi = 0x8F;
+  } else {
+    return 0;
+  }
+  if (len > n || s[1] < lo || s[1] > hi) return 0;
+  for (size_t k = 2; k < len; ++k)
+    if (s[k] < 0x80 || s[k] > 0xBF) return 0;
+  return len;
+}
+
 /* One line, without its line ending. */
 static int parse_line(parser *p, const char *s, size_t n, unsigned line) {
   if (n > 0 && s[n - 1] == '\r') --n; /* CRLF */
@@ -237,6 +262,11 @@ static int parse_line(parser *p, const char *s, size_t n, unsigned line) {
     const unsigned char ch = (unsigned char)s[k];
     if ((ch < 0x20 && ch != '\t') || ch == 0x7f)
       return fail(p, line, "control character (code %u) not allowed", (unsigned)ch);
+    if (ch >= 0x80) {
+      const size_t len = utf8_length((const unsigned char *)s + k, n - k);
+      if (!len) return fail(p, line, "text is not valid UTF-8");
+      k += len - 1;
+    }
   }
   const size_t i = skip_ws(s, 0, n);
   if (i == n || s[i] == '#') return ACP_OK;

@@ -35,7 +35,7 @@ int acp_pressure_ratio_to_mach(double ratio, double *mach) {
   for (int k = 0; k < 60; ++k) {
     const double next = RAYLEIGH_ITER * sqrt((ratio + 1.0) * pow(1.0 - 1.0 / (7.0 * m * m), 2.5));
     if (fabs(next - m) <= 1e-15 * next) {
-      *mach = next;
+      *mach = fmin(next, ACP_MACH_MAX); /* ratios accepted within round-off above Mach 5 */
       return ACP_OK;
     }
     m = next;
@@ -58,13 +58,24 @@ static double sound_speed(double t) { return sqrt(ACP_GAMMA * ACP_R_AIR * t); }
 /* Mach number valid for the conversions: finite, 0 to ACP_MACH_MAX. */
 static int mach_ok(double m) { return acp_in_range(m, 0.0, ACP_MACH_MAX); }
 
+/* A Mach number computed from a speed: within round-off above the edge it is
+   the edge (so Mach 5 converted to a speed and back stays valid), else NaN
+   outside the range. */
+static double mach_result(double m) {
+  if (m > ACP_MACH_MAX && m <= ACP_MACH_MAX * (1.0 + 1e-14)) return ACP_MACH_MAX;
+  return mach_ok(m) ? m : ACP_NAN;
+}
+
 double acp_cas_to_impact_pressure(double cas) {
-  if (!mach_ok(cas / ACP_A0)) return ACP_NAN;
-  return ACP_P0 * mach_to_ratio(cas / ACP_A0);
+  if (!(cas >= 0.0)) return ACP_NAN; /* before dividing: -1e-320/a0 underflows to -0 */
+  const double m = mach_result(cas / ACP_A0);
+  if (isnan(m)) return ACP_NAN;
+  return ACP_P0 * mach_to_ratio(m);
 }
 
 double acp_impact_pressure_to_cas(double qc) {
   double m;
+  if (!(qc >= 0.0)) return ACP_NAN; /* before dividing: a tiny negative qc/p0 is -0 */
   if (acp_pressure_ratio_to_mach(qc / ACP_P0, &m) != ACP_OK) return ACP_NAN;
   return m * ACP_A0;
 }
@@ -96,8 +107,7 @@ double acp_mach_to_cas(double mach, double hp) {
 double acp_tas_to_mach(double tas, double hp, double dtemp) {
   double p, t;
   if (!isfinite(tas) || tas < 0.0 || state(hp, dtemp, &p, &t) != ACP_OK) return ACP_NAN;
-  const double m = tas / sound_speed(t);
-  return mach_ok(m) ? m : ACP_NAN;
+  return mach_result(tas / sound_speed(t));
 }
 
 double acp_mach_to_tas(double mach, double hp, double dtemp) {
@@ -126,8 +136,7 @@ double acp_mach_to_eas(double mach, double hp) {
 double acp_eas_to_mach(double eas, double hp) {
   double p, t;
   if (!isfinite(eas) || eas < 0.0 || state(hp, 0.0, &p, &t) != ACP_OK) return ACP_NAN;
-  const double m = eas / sqrt(ACP_GAMMA * p / ACP_RHO0);
-  return mach_ok(m) ? m : ACP_NAN;
+  return mach_result(eas / sqrt(ACP_GAMMA * p / ACP_RHO0));
 }
 
 double acp_cas_to_eas(double cas, double hp) {
@@ -160,7 +169,7 @@ int acp_crossover_altitude(double cas, double mach, double *hp) {
 double acp_reynolds_per_metre(double tas, double hp, double dtemp) {
   acp_atmos a;
   if (!isfinite(tas) || tas < 0.0 || acp_isa(hp, dtemp, &a) != ACP_OK) return ACP_NAN;
-  if (!mach_ok(tas / a.sound_speed)) return ACP_NAN;
+  if (isnan(mach_result(tas / a.sound_speed))) return ACP_NAN;
   return tas / a.kinematic_viscosity;
 }
 
@@ -179,9 +188,10 @@ int acp_wind_triangle(double tas, double track, double wind_from, double wind_sp
   if (fabs(cross) >= 1.0) return ACP_ERR_RANGE;
   const double wca = asin(cross);
   const double gs = tas * cos(wca) - wind_speed * cos(rel);
-  if (!(gs > 0.0)) return ACP_ERR_RANGE;
+  if (!(gs > 0.0) || !isfinite(gs)) return ACP_ERR_RANGE;
   double hdg = fmod(track + wca, TWO_PI);
   if (hdg < 0.0) hdg += TWO_PI;
+  if (hdg >= TWO_PI) hdg = 0.0; /* -tiny + 2 pi rounds to 2 pi */
   acp_put(ground_speed, gs);
   acp_put(heading, hdg);
   acp_put(drift, -wca);

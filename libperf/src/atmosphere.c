@@ -317,14 +317,18 @@ static int total_temperature_args(double temp, double mach, double recovery) {
          acp_in_range(recovery, 0.0, 1.0);
 }
 
+/* A temperature result must be a positive finite double: huge inputs overflow,
+   denormal ones underflow to 0 K. */
+static double temperature_result(double t) { return isfinite(t) && t > 0.0 ? t : ACP_NAN; }
+
 double acp_total_temperature(double sat, double mach, double recovery) {
   if (!total_temperature_args(sat, mach, recovery)) return ACP_NAN;
-  return sat * (1.0 + recovery * 0.5 * (ACP_GAMMA - 1.0) * mach * mach);
+  return temperature_result(sat * (1.0 + recovery * 0.5 * (ACP_GAMMA - 1.0) * mach * mach));
 }
 
 double acp_static_temperature(double tat, double mach, double recovery) {
   if (!total_temperature_args(tat, mach, recovery)) return ACP_NAN;
-  return tat / (1.0 + recovery * 0.5 * (ACP_GAMMA - 1.0) * mach * mach);
+  return temperature_result(tat / (1.0 + recovery * 0.5 * (ACP_GAMMA - 1.0) * mach * mach));
 }
 
 #define QNH_MIN 80000.0

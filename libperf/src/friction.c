@@ -29,7 +29,8 @@ double acp_roughness_cutoff_reynolds(double length, double roughness, double mac
   const double base = pow(length / roughness, 1.053);
   const double subsonic = 38.21 * base;
   const double transonic = 44.62 * base * pow(mach, 1.16);
-  return fmax(subsonic, transonic);
+  const double cutoff = fmax(subsonic, transonic);
+  return isfinite(cutoff) ? cutoff : ACP_NAN; /* (l/k)^1.053 overflows past l/k ~ 1e292 */
 }
 
 double acp_skin_friction(double reynolds, double mach, double laminar_fraction, double length,
@@ -39,9 +40,10 @@ double acp_skin_friction(double reynolds, double mach, double laminar_fraction, 
     return ACP_NAN;
   double re_turb = reynolds;
   if (roughness > 0.0) {
+    /* NaN here is a cutoff past the largest double (the arguments were checked
+       above; a bad Mach number makes the turbulent term NaN below): no limit. */
     const double cutoff = acp_roughness_cutoff_reynolds(length, roughness, mach);
-    if (isnan(cutoff)) return ACP_NAN;
-    re_turb = fmin(reynolds, fmax(cutoff, ACP_REYNOLDS_MIN));
+    if (!isnan(cutoff)) re_turb = fmin(reynolds, fmax(cutoff, ACP_REYNOLDS_MIN));
   }
   return laminar_fraction * acp_skin_friction_laminar(reynolds) +
          (1.0 - laminar_fraction) * acp_skin_friction_turbulent(re_turb, mach);

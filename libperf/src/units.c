@@ -65,7 +65,9 @@ static int convert(double x, const char *unit, double *out, int to_si) {
   if (!unit || !isfinite(x)) return ACP_ERR_INVALID;
   const unit_def *u = find_unit(unit);
   if (!u) return ACP_ERR_UNKNOWN_KEY;
-  *out = to_si ? x * u->factor + u->offset : (x - u->offset) / u->factor;
+  const double y = to_si ? x * u->factor + u->offset : (x - u->offset) / u->factor;
+  if (!isfinite(y)) return ACP_ERR_RANGE; /* overflow: no double holds the result */
+  *out = y;
   return ACP_OK;
 }
 

@@ -11,7 +11,7 @@
 
 #include <acperf.h>
 
-static const char *GOOD = "# comment line\n"
+static const char *GOOD = "# comment line, UTF-8: caf\xc3\xa9 \xe2\x80\x94 \xf0\x9f\x9b\xa9\n"
                           "name = \"Test aircraft\"   # trailing comment\n"
                           "wing_area = 30.5\n"
                           "span=15\n"
@@ -239,6 +239,9 @@ static void test_parse_errors(void **state) {
       {"wing_area = 30\nspan = 15\x01\n", 2, "control character"},
       {"wing_area = 30\rspan = 15\n", 1, "control character"},
       {"count = 2\n", 1, "unknown key 'count'"},
+      {"wing_area = 30 # caf\xc3\n", 1, "not valid UTF-8"},
+      {"name = \"\xed\xa0\x80\"\n", 1, "not valid UTF-8"},
+      {"name = \"\xc0\xaf\"\n", 1, "not valid UTF-8"},
       {"[component.w]\ntype = \"surface\"\ncount = 1.5\n", 3, "not a whole number"},
       {"wing_area = 30\nspan = 15\ncd0 = 0.02\n[component.w]\ntype = \"other\"\nwetted_area = 1\n"
        "length = 1\n",

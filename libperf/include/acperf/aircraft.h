@@ -153,7 +153,10 @@ ACP_API int acp_aircraft_check(const acp_aircraft *ac, char *err, size_t errlen)
  * no hex). Strings are TOML basic strings without escapes, or literal
  * strings. Keys are bare keys; a key twice in one table, a table twice,
  * an unknown key and a value outside its range are errors. After the
- * last line the model is checked as by acp_aircraft_check().
+ * last line the model is checked as by acp_aircraft_check(). The text must
+ * be valid UTF-8 without control characters other than tab (as TOML).
+ * Numbers are read with strtod() with '.' put in place of the current C
+ * locale's decimal point, so a program's setlocale() does not change them.
  *
  * @param ac     the model; unchanged on error
  * @param text   NUL-terminated text

@@ -111,7 +111,8 @@ ACP_API double acp_reynolds_per_metre(double tas, double hp, double dtemp);
  * @param heading      out: true heading (rad), in [0, 2 pi) (may be NULL)
  * @param drift        out: drift angle (rad), in (-pi/2, pi/2) (may be NULL)
  * @return ACP_OK; ACP_ERR_INVALID; ACP_ERR_RANGE when the crosswind exceeds the
- *         TAS or the ground speed would not be positive (track cannot be flown).
+ *         TAS or the ground speed would not be positive (track cannot be flown)
+ *         or would overflow.
  */
 ACP_API int acp_wind_triangle(double tas, double track, double wind_from, double wind_speed,
                               double *ground_speed, double *heading, double *drift);

@@ -162,7 +162,8 @@ ACP_API double acp_outside_air_temperature(double dtemp, double hp);
  * @param sat       static air temperature (K), > 0
  * @param mach      Mach number, 0 to 5
  * @param recovery  probe recovery factor r, 0 to 1
- * @return total air temperature (K); NaN on invalid input.
+ * @return total air temperature (K); NaN on invalid input, or when the
+ *         result is not a positive finite double (overflow, underflow).
  */
 ACP_API double acp_total_temperature(double sat, double mach, double recovery);
 /** Inverse of acp_total_temperature(): static temperature (K) from total; NaN on error. */

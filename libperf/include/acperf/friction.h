@@ -63,7 +63,8 @@ ACP_API double acp_skin_friction_mixed(double reynolds, double mach, double lami
  *                  about 1.5e-6, smooth paint 6.3e-6, camouflage paint 1.0e-5:
  *                  Raymer table 12.5)
  * @param mach      Mach number, 0 to 5
- * @return cutoff Reynolds number; NaN on invalid input.
+ * @return cutoff Reynolds number; NaN on invalid input or when it overflows
+ *         (l/k above about 1e292).
  */
 ACP_API double acp_roughness_cutoff_reynolds(double length, double roughness, double mach);
 

@@ -78,7 +78,8 @@ ACP_API double acp_rad_to_deg(double rad);
  * @param unit   unit name from the list above
  * @param si     out: value in the SI unit of the same quantity; NaN on error
  * @return ACP_OK; ACP_ERR_INVALID for a NULL pointer or non-finite value;
- *         ACP_ERR_UNKNOWN_KEY for an unknown unit name.
+ *         ACP_ERR_UNKNOWN_KEY for an unknown unit name; ACP_ERR_RANGE when
+ *         the result overflows (is not a finite double).
  */
 ACP_API int acp_to_si(double value, const char *unit, double *si);
 
