@@ -22,5 +22,7 @@
 #include "acperf/aircraft.h"
 #include "acperf/polar.h"
 #include "acperf/speeds.h"
+#include "acperf/cruise.h"
+#include "acperf/mission.h"
 
 #endif /* ACPERF_H */
