@@ -26,7 +26,7 @@
 #include "acperf/export.h"
 #include "acperf/schedule.h"
 
-#define ACP_CLIMB_STEP_DEFAULT 152.4 /**< default pressure-altitude step, m (500 ft) */
+#define ACP_CLIMB_STEP_DEFAULT 609.6 /**< default pressure-altitude step, m (2,000 ft): Simpson steps cut at every kink (docs/methods/climb.md) */
 
 ACP_BEGIN_DECLS
 
