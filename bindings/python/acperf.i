@@ -47,3 +47,7 @@
 %include "acperf/aircraft.h"
 %include "acperf/polar.h"
 %include "acperf/speeds.h"
+%include "acperf/schedule.h"
+%include "acperf/propulsion.h"
+ACPY_TRACE(acp_profile_point)
+%include "acperf/climb.h"

@@ -131,3 +131,41 @@ static double *acpy_output(size_t len, PyObject **owner) {
   $result = SWIG_Python_AppendOutput($result,
                                      SWIG_NewPointerObj(copy, $1_descriptor, SWIG_POINTER_OWN));
 }
+
+/* ---- traces: (size_t capacity, <struct of doubles> *points, size_t *count) ----
+   The Python argument is the capacity; the result is a float64 array of shape
+   (count, fields), the points' fields in struct order (the structs are all
+   doubles, so their memory is that array). */
+%define ACPY_TRACE(TYPE)
+%typemap(in) (size_t capacity, TYPE *points, size_t *count)
+    (size_t count_value = 0, PyObject *owner = NULL) {
+  const long cap = PyLong_AsLong($input);
+  if (cap < 0 || cap > 10000000) {
+    if (!PyErr_Occurred()) PyErr_SetString(PyExc_ValueError, "capacity must be 0 to 1e7");
+    SWIG_fail;
+  }
+  npy_intp dims[2] = {cap, (npy_intp)(sizeof(TYPE) / sizeof(double))};
+  owner = PyArray_SimpleNew(2, dims, NPY_DOUBLE);
+  if (!owner) SWIG_fail;
+  $1 = (size_t)cap;
+  $2 = (TYPE *)PyArray_DATA((PyArrayObject *)owner);
+  $3 = &count_value;
+}
+%typemap(argout) (size_t capacity, TYPE *points, size_t *count) {
+  PyObject *used = PySequence_GetSlice(owner$argnum, 0, (Py_ssize_t)count_value$argnum);
+  if (!used) SWIG_fail;
+  $result = SWIG_Python_AppendOutput($result, used);
+}
+%typemap(freearg) (size_t capacity, TYPE *points, size_t *count) { Py_XDECREF(owner$argnum); }
+%enddef
+
+/* ---- enum-valued int parameters (rating, mode): any whole real number ----
+   The Python layer passes floats (broadcast arrays are float64); a value that
+   is not a whole number becomes -1, which the C function refuses as invalid. */
+%typemap(in) int rating, int mode {
+  const double v = PyFloat_AsDouble($input);
+  if (v == -1.0 && PyErr_Occurred()) SWIG_fail; /* not a real number: TypeError */
+  /* NaN, Inf or a fraction is no enum value: -1, which the C function refuses */
+  $1 = (isfinite(v) && v == floor(v) && fabs(v) < 1.0e9) ? (int)v : -1;
+}
+%typemap(typecheck, precedence=SWIG_TYPECHECK_INTEGER) int rating, int mode "$1 = 1;"

@@ -16,8 +16,13 @@
 #include "acperf/atmosphere.h"
 #include "acperf/airspeed.h"
 #include "acperf/friction.h"
+#include "acperf/schedule.h"
+#include "acperf/propulsion.h"
+#include "acperf/climb.h"
 #include "acperf/aircraft.h"
 #include "acperf/polar.h"
 #include "acperf/speeds.h"
+#include "acperf/cruise.h"
+#include "acperf/mission.h"
 
 #endif /* ACPERF_H */

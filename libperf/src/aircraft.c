@@ -37,6 +37,37 @@ const ac_keydef AC_KEYS[AK_COUNT] = {
     [AK_SWEEP_QC] = {"sweep_quarter_chord", "rad", 0.0, 60.0 * DEG, 0.0, 0},
     [AK_CD_MISC] = {"cd_misc", "", 0.0, 0.1, 0.0, 0},
     [AK_LEAKAGE] = {"leakage_fraction", "", 0.0, 0.5, 0.0, 0},
+    [AK_ENGINE_TYPE] = {"engine_type", "", 1.0, 3.0, ACP_NAN, KF_INTEGER},
+    [AK_ENGINE_COUNT] = {"engine_count", "", 1.0, 8.0, ACP_NAN, KF_INTEGER},
+    [AK_ENGINE_THRUST] = {"engine_thrust", "N", 100.0, 1.0e6, ACP_NAN, 0},
+    [AK_THROTTLE_RATIO] = {"throttle_ratio", "", 0.9, 1.3, 1.0, 0},
+    [AK_TSFC_C0] = {"tsfc_c0", "kg/(N s)", 1.0e-6, 1.0e-3, ACP_NAN, 0},
+    [AK_TSFC_C1] = {"tsfc_c1", "kg/(N s)", 0.0, 1.0e-3, 0.0, 0},
+    [AK_ENGINE_POWER] = {"engine_power", "W", 1.0e3, 2.0e7, ACP_NAN, 0},
+    [AK_POWER_LAPSE_EXPONENT] = {"power_lapse_exponent", "", 0.3, 1.5, ACP_NAN, 0},
+    [AK_PROPELLER_EFFICIENCY] = {"propeller_efficiency", "", 0.3, 0.95, ACP_NAN, 0},
+    [AK_PSFC] = {"psfc", "kg/(W s)", 1.0e-8, 1.0e-6, ACP_NAN, 0},
+    [AK_CLIMB_RATING] = {"climb_rating", "", 0.3, 1.0, ACP_NAN, 0},
+    [AK_CRUISE_RATING] = {"cruise_rating", "", 0.3, 1.0, ACP_NAN, 0},
+    [AK_IDLE_THRUST_FRACTION] = {"idle_thrust_fraction", "", 0.0, 0.3, ACP_NAN, 0},
+    [AK_IDLE_FUEL_FLOW] = {"idle_fuel_flow", "kg/s", 0.0, 5.0, ACP_NAN, 0},
+    [AK_VMO] = {"vmo", "m/s", 20.0, 400.0, ACP_NAN, 0},
+    [AK_MMO] = {"mmo", "", 0.1, 0.95, ACP_NAN, 0},
+    [AK_MAX_ALTITUDE] = {"max_altitude", "m", 0.0, 25000.0, ACP_NAN, 0},
+    [AK_CL_BUFFET] = {"cl_buffet", "", 0.2, 2.0, ACP_NAN, 0},
+    [AK_MASS_MAX_TAKEOFF] = {"mass_max_takeoff", "kg", 1.0, 1.0e6, ACP_NAN, 0},
+    [AK_MASS_MAX_LANDING] = {"mass_max_landing", "kg", 1.0, 1.0e6, ACP_NAN, 0},
+    [AK_MASS_MAX_ZERO_FUEL] = {"mass_max_zero_fuel", "kg", 1.0, 1.0e6, ACP_NAN, 0},
+    [AK_MASS_OPERATING_EMPTY] = {"mass_operating_empty", "kg", 1.0, 1.0e6, ACP_NAN, 0},
+    [AK_FUEL_CAPACITY] = {"fuel_capacity", "kg", 0.0, 5.0e5, ACP_NAN, 0},
+    /* 250 kt below 10,000 ft: the speed limit of many air-traffic rules (common practice) */
+    [AK_SPEED_LIMIT_CAS] = {"speed_limit_cas", "m/s", 20.0, 300.0, 250.0 * 1852.0 / 3600.0, 0},
+    [AK_SPEED_LIMIT_ALTITUDE] = {"speed_limit_altitude", "m", -5000.0, 25000.0, 3048.0, 0},
+    [AK_CLIMB_CAS] = {"climb_cas", "m/s", 20.0, 300.0, ACP_NAN, 0},
+    [AK_CLIMB_MACH] = {"climb_mach", "", 0.05, 0.95, ACP_NAN, 0},
+    [AK_DESCENT_CAS] = {"descent_cas", "m/s", 20.0, 300.0, ACP_NAN, 0},
+    [AK_DESCENT_MACH] = {"descent_mach", "", 0.05, 0.95, ACP_NAN, 0},
+    [AK_CRUISE_MACH] = {"cruise_mach", "", 0.05, 0.95, ACP_NAN, 0},
 };
 
 /* Component fields; flags: the types that use the field | KF_*. */
@@ -204,6 +235,8 @@ int ac_set(acp_aircraft *ac, const char *key, double value, char *err, size_t er
   return ACP_OK;
 }
 
+static const char *const ENGINE_NAMES[] = {"", "turbofan", "turboprop", "piston"};
+
 static int type_code(const char *text) {
   for (int t = ACP_COMPONENT_SURFACE; t <= ACP_COMPONENT_OTHER; ++t)
     if (strcmp(text, TYPE_NAMES[t]) == 0) return t;
@@ -226,6 +259,12 @@ int ac_set_text(acp_aircraft *ac, const char *key, const char *value, char *err,
     }
     memcpy(ac->name, value, n + 1);
     return ACP_OK;
+  }
+  if (strcmp(key, "engine_type") == 0) {
+    for (int t = ENGINE_TURBOFAN; t <= ENGINE_PISTON; ++t)
+      if (strcmp(value, ENGINE_NAMES[t]) == 0) return ac_set(ac, key, (double)t, err, errlen);
+    msg(err, errlen, "key 'engine_type': '%s' is not one of turbofan, turboprop, piston", value);
+    return ACP_ERR_INVALID;
   }
   const char *name, *field;
   size_t nlen;
@@ -299,6 +338,11 @@ int acp_aircraft_get_text(const acp_aircraft *ac, const char *key, char *buf, si
   if (!ac || !key) return ACP_ERR_INVALID;
   if (strcmp(key, "name") == 0) {
     copy_text(buf, len, ac->name);
+    return ACP_OK;
+  }
+  if (strcmp(key, "engine_type") == 0) {
+    const double t = ac->v[AK_ENGINE_TYPE];
+    copy_text(buf, len, isnan(t) ? "" : ENGINE_NAMES[(int)t]);
     return ACP_OK;
   }
   const char *name, *field;

@@ -25,8 +25,44 @@ enum ac_key {
   AK_SWEEP_QC,
   AK_CD_MISC,
   AK_LEAKAGE,
+  /* propulsion (propulsion.c) */
+  AK_ENGINE_TYPE, /* 1 turbofan, 2 turboprop, 3 piston; text in the file */
+  AK_ENGINE_COUNT,
+  AK_ENGINE_THRUST,
+  AK_THROTTLE_RATIO,
+  AK_TSFC_C0,
+  AK_TSFC_C1,
+  AK_ENGINE_POWER,
+  AK_POWER_LAPSE_EXPONENT,
+  AK_PROPELLER_EFFICIENCY,
+  AK_PSFC,
+  AK_CLIMB_RATING,
+  AK_CRUISE_RATING,
+  AK_IDLE_THRUST_FRACTION,
+  AK_IDLE_FUEL_FLOW,
+  /* limits and masses */
+  AK_VMO,
+  AK_MMO,
+  AK_MAX_ALTITUDE,
+  AK_CL_BUFFET,
+  AK_MASS_MAX_TAKEOFF,
+  AK_MASS_MAX_LANDING,
+  AK_MASS_MAX_ZERO_FUEL,
+  AK_MASS_OPERATING_EMPTY,
+  AK_FUEL_CAPACITY,
+  /* speed schedules (schedule.c, climb.c, cruise.c) */
+  AK_SPEED_LIMIT_CAS,
+  AK_SPEED_LIMIT_ALTITUDE,
+  AK_CLIMB_CAS,
+  AK_CLIMB_MACH,
+  AK_DESCENT_CAS,
+  AK_DESCENT_MACH,
+  AK_CRUISE_MACH,
   AK_COUNT
 };
+
+/* Engine types: the values of AK_ENGINE_TYPE. */
+enum ac_engine_type { ENGINE_TURBOFAN = 1, ENGINE_TURBOPROP = 2, ENGINE_PISTON = 3 };
 
 /* Component numeric fields: index into ac_component.v. */
 enum comp_key {

@@ -167,7 +167,8 @@ static int assign(parser *p, const char *key, const char *text, double number, u
     snprintf(full, sizeof full, "component.%s.%s", table, key);
   }
   if (*first) return fail(p, line, "duplicate key '%s' (first on line %u)", key, *first);
-  const int is_text_key = strcmp(key, p->cur ? "type" : "name") == 0;
+  const int is_text_key = p->cur ? strcmp(key, "type") == 0
+                                  : strcmp(key, "name") == 0 || strcmp(key, "engine_type") == 0;
   if (is_text_key && !text) return fail(p, line, "key '%s' takes a quoted text", key);
   if (!is_text_key && text) return fail(p, line, "key '%s' takes a number, not text", key);
   why[0] = '\0';

@@ -4,6 +4,9 @@
 #include "acperf/status.h"
 #include "atmosphere_layers.h"
 #include "internal.h"
+#include "vector_math.h"
+
+#include <string.h>
 
 /* Layers of ISO 2533:1975 table 4: base geopotential altitude (m), lapse rate
    (K/m), base temperature (K), base pressure (Pa). Base pressures are the
@@ -73,22 +76,118 @@ int acp_isa(double hp, double dtemp, acp_atmos *out) {
   return ACP_OK;
 }
 
+/* ---- array path: branch-free layer selection, one pow() per element -------
+   Per layer k: p = pb * pow(x, y) with x = Tstd/Tb, y = -g0/(R L) in a gradient
+   layer, and x = e, y = -g0 (h - hb)/(R Tb) in an isothermal one, so both kinds
+   take the same single pow(). e is rounded to double (relative 1e-16), which
+   moves p by under 2e-16 relative since |y| < 2 there. */
+#define E_MINUS_1 1.7182818284590452354
+static const double BLK_H[ATM_NLAYERS] = {0.0, 11000.0, 20000.0, 32000.0, 47000.0, 51000.0, 71000.0};
+static const double BLK_TB[ATM_NLAYERS] = {288.15, 216.65, 216.65, 228.65, 270.65, 270.65, 214.65};
+static const double BLK_LAPSE[ATM_NLAYERS] = {-0.0065, 0.0, 0.001, 0.0028, 0.0, -0.0028, -0.002};
+static const double BLK_INV_TB[ATM_NLAYERS] = {1.0 / 288.15, 1.0 / 216.65, 1.0 / 216.65,
+                                               1.0 / 228.65, 1.0 / 270.65, 1.0 / 270.65,
+                                               1.0 / 214.65};
+static const double BLK_X_ISO[ATM_NLAYERS] = {0.0, E_MINUS_1, 0.0, 0.0, E_MINUS_1, 0.0, 0.0};
+static const double BLK_EXPO[ATM_NLAYERS] = {
+    -ACP_G0 / (ACP_R_AIR * -0.0065), 0.0, -ACP_G0 / (ACP_R_AIR * 0.001),
+    -ACP_G0 / (ACP_R_AIR * 0.0028), 0.0, -ACP_G0 / (ACP_R_AIR * -0.0028),
+    -ACP_G0 / (ACP_R_AIR * -0.002)};
+static const double BLK_ISO_K[ATM_NLAYERS] = {0.0, -ACP_G0 / (ACP_R_AIR * 216.65), 0.0, 0.0,
+                                              -ACP_G0 / (ACP_R_AIR * 270.65), 0.0, 0.0};
+static const double BLK_PB[ATM_NLAYERS] = {101325.0,           22632.040095007799,
+                                           5474.8774242810459, 868.01577662021338,
+                                           110.90577336730986, 66.938528121179633,
+                                           3.9563921603965990};
+static const double BLK_ZERO[ACP_BLOCK] = {0.0};
+
+ACP_DISPATCH
+size_t atm_block(size_t n, const double *hp, const double *dtemp, double *t, double *p) {
+  if (!dtemp) dtemp = BLK_ZERO; /* n <= ACP_BLOCK */
+#pragma omp simd
+  for (size_t i = 0; i < n; ++i) {
+    const double h0 = hp[i], d0 = dtemp[i];
+    /* 0 for a valid point, NaN otherwise: added to the outputs, it marks them
+       without a branch ('&' not '&&' for the same reason). */
+    const double bad = ((h0 >= ACP_ISA_HP_MIN) & (h0 <= ACP_ISA_HP_MAX) &
+                        (d0 >= ACP_ISA_DTEMP_MIN) & (d0 <= ACP_ISA_DTEMP_MAX))
+                           ? 0.0
+                           : ACP_NAN;
+    const double h = bad == 0.0 ? h0 : 0.0;
+    /* The layer's constants by a chain of selects, which vectorises where
+       indexed loads (gathers) do not. */
+    double hb = BLK_H[0], tb = BLK_TB[0], lapse = BLK_LAPSE[0], inv_tb = BLK_INV_TB[0];
+    double x_iso = BLK_X_ISO[0], expo = BLK_EXPO[0], iso_k = BLK_ISO_K[0], pb = BLK_PB[0];
+#define ATM_PICK(k)                                \
+  do {                                             \
+    const int above = h >= BLK_H[k];               \
+    hb = above ? BLK_H[k] : hb;                    \
+    tb = above ? BLK_TB[k] : tb;                   \
+    lapse = above ? BLK_LAPSE[k] : lapse;          \
+    inv_tb = above ? BLK_INV_TB[k] : inv_tb;       \
+    x_iso = above ? BLK_X_ISO[k] : x_iso;          \
+    expo = above ? BLK_EXPO[k] : expo;             \
+    iso_k = above ? BLK_ISO_K[k] : iso_k;          \
+    pb = above ? BLK_PB[k] : pb;                   \
+  } while (0)
+    /* Unrolled by hand: GCC vectorises straight-line selects, not an inner loop. */
+    ATM_PICK(1);
+    ATM_PICK(2);
+    ATM_PICK(3);
+    ATM_PICK(4);
+    ATM_PICK(5);
+    ATM_PICK(6);
+#undef ATM_PICK
+    const double dh = h - hb;
+    const double tstd = tb + lapse * dh;
+    t[i] = tstd + d0 + bad;
+    p[i] = pb * pow(tstd * inv_tb + x_iso, expo + iso_k * dh) + bad;
+  }
+  size_t bad = 0;
+  for (size_t i = 0; i < n; ++i) bad += isnan(p[i]) ? 1u : 0u;
+  return bad;
+}
+
+/* The derived quantities of a block; NaN temperature propagates. */
+ACP_DISPATCH
+static void atm_outputs(size_t n, const double *t, const double *p, double *density,
+                        double *sound_speed, double *mu, double *nu) {
+  if (density) {
+#pragma omp simd
+    for (size_t i = 0; i < n; ++i) density[i] = p[i] / (ACP_R_AIR * t[i]);
+  }
+  if (sound_speed) {
+#pragma omp simd
+    for (size_t i = 0; i < n; ++i) sound_speed[i] = sqrt(ACP_GAMMA * ACP_R_AIR * t[i]);
+  }
+  if (mu || nu) {
+#pragma omp simd
+    for (size_t i = 0; i < n; ++i) {
+      const double m = ACP_SUTHERLAND_BETA * t[i] * sqrt(t[i]) / (t[i] + ACP_SUTHERLAND_S);
+      if (mu) mu[i] = m;
+      if (nu) nu[i] = m * ACP_R_AIR * t[i] / p[i];
+    }
+  }
+}
+
 size_t acp_isa_n(size_t n, const double *hp, const double *dtemp, double *temperature,
                  double *pressure, double *density, double *sound_speed,
                  double *dynamic_viscosity, double *kinematic_viscosity) {
+  double t[ACP_BLOCK], p[ACP_BLOCK];
   size_t bad = 0;
-  for (size_t i = 0; i < n; ++i) {
-    acp_atmos a;
-    if (!hp || acp_isa(hp[i], acp_opt(dtemp, i, 0.0), &a) != ACP_OK) {
-      set_nan(&a);
-      ++bad;
+  for (size_t i = 0; i < n; i += ACP_BLOCK) {
+    const size_t m = n - i < ACP_BLOCK ? n - i : ACP_BLOCK;
+    if (hp) {
+      bad += atm_block(m, hp + i, dtemp ? dtemp + i : NULL, t, p);
+    } else {
+      for (size_t j = 0; j < m; ++j) t[j] = p[j] = ACP_NAN;
+      bad += m;
     }
-    acp_put(temperature ? &temperature[i] : NULL, a.temperature);
-    acp_put(pressure ? &pressure[i] : NULL, a.pressure);
-    acp_put(density ? &density[i] : NULL, a.density);
-    acp_put(sound_speed ? &sound_speed[i] : NULL, a.sound_speed);
-    acp_put(dynamic_viscosity ? &dynamic_viscosity[i] : NULL, a.dynamic_viscosity);
-    acp_put(kinematic_viscosity ? &kinematic_viscosity[i] : NULL, a.kinematic_viscosity);
+    if (temperature) memcpy(temperature + i, t, m * sizeof t[0]);
+    if (pressure) memcpy(pressure + i, p, m * sizeof p[0]);
+    atm_outputs(m, t, p, density ? density + i : NULL, sound_speed ? sound_speed + i : NULL,
+                dynamic_viscosity ? dynamic_viscosity + i : NULL,
+                kinematic_viscosity ? kinematic_viscosity + i : NULL);
   }
   return bad;
 }

@@ -20,4 +20,9 @@ int atm_check(double hp, double dtemp);
 /* Standard temperature and pressure at a range-checked pressure altitude. */
 void atm_standard(double hp, double *temperature, double *pressure);
 
+/* Array path: standard temperature + dtemp and pressure of n <= ACP_BLOCK points
+   (dtemp may be NULL); NaN for invalid points, whose count is returned. */
+#include <stddef.h>
+size_t atm_block(size_t n, const double *hp, const double *dtemp, double *t, double *p);
+
 #endif /* ACPERF_ATMOSPHERE_LAYERS_H */

@@ -109,6 +109,10 @@ class CLib:
             elif ptype in ("const acp_aircraft*", "acp_aircraft*"):
                 argtypes.append(ctypes.c_void_p)
                 cargs.append(next(values))
+            elif ptype == "int":  # enum values (rating, mode): whole numbers
+                v = next(values)
+                argtypes.append(ctypes.c_int)
+                cargs.append(int(v) if math.isfinite(v) else -1)
             elif ptype == "size_t":
                 argtypes.append(ctypes.c_size_t)
                 cargs.append(next(values))
@@ -154,3 +158,9 @@ def clib():
 def same(a, b):
     """Equal to the last bit, NaN equal to NaN (same C code, same inputs)."""
     return (math.isnan(a) and math.isnan(b)) or a == b
+
+
+def close(a, b):
+    """Array form against the scalar C function: the vectorised kernels (libmvec,
+    docs/performance.md) agree within 1e-14 relative; NaN equal to NaN."""
+    return same(a, b) or abs(a - b) <= 1e-14 * abs(b)

@@ -34,12 +34,20 @@ MODEL_FUNCTIONS = sorted(n for n in acperf.__all__
 SPEEDS_H = parse_headers([HEADERS / "speeds.h"])
 
 POOLS = {
-    "mass": [15000.0, 30000.0, 38000.0, 0.0, 2.0e6],
+    "mass": [5000.0, 5500.0, 15000.0, 30000.0, 38000.0, 0.0, 2.0e6],
     "hp": [0.0, 3000.0, 10000.0, 12000.0, 90000.0],
-    "dtemp": [0.0, 15.0, -200.0],
+    "dtemp": [0.0, 15.0, -10.0, -200.0],
     "tas": [60.0, 150.0, 230.0, 0.0, 400.0],
     "load_factor": [1.0, 1.5, 20.0],
     "bank": [0.0, 0.5, 2.0],
+    # profiles (climb.h): valid climbs and descents among the pairs, and bad ones
+    "hp_start": [457.2, 10668.0, 90000.0],
+    "hp_end": [6000.0, 457.2],
+    "wind": [0.0, -20.0],
+    "step": [0.0, 300.0, 5.0],
+    # engines (propulsion.h)
+    "rating": [1.0, 3.0, 7.0],
+    "thrust": [2000.0, 20000.0, -1.0, 1.0e7],
 }
 
 

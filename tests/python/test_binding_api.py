@@ -21,7 +21,7 @@ import numpy as np
 import pytest
 
 import acperf
-from conftest import HEADERS, CStatusError, parse_headers, parse_structs, same
+from conftest import close, HEADERS, CStatusError, parse_headers, parse_structs, same
 
 # Sample values per C parameter name, valid and invalid ones (the last entries
 # of most lists are outside the documented ranges of the headers).
@@ -65,6 +65,18 @@ POOLS = {
     "mach_drag_divergence": [0.6, 0.8, 0.9, 2.0],
     "mach_critical": [0.6, 0.7, 0.75, -1.0],
     "max_thickness_position": [0.3, 0.4, 0.5, 1.5],
+    # schedule.h: 250 kt below 10,000 ft, 290 kt / M0.76, VMO 320 kt, MMO 0.82
+    # (invented); element 1 of each pool is a valid value
+    "cas_low": [-1.0, 128.6],
+    "hp_limit": [3048.0, 3048.0],
+    "vmo": [-1.0, 164.6],
+    "mmo": [6.0, 0.82],
+    "mode": [9.0, 2.0, 3.0],
+    # propulsion.h
+    "throttle_ratio": [2.0, 1.05, 1.0],
+    "c0": [-1.0, 1.19e-5],
+    "c1": [0.0, 1.05e-5],
+    "density_ratio": [0.1, 1.0, 0.5],
     "sweep_max_thickness": [0.0, 0.3, 0.5, 2.0],
     "fineness_ratio": [2.0, 7.5, 12.0, 0.0],
 }
@@ -114,8 +126,9 @@ def test_bound_functions_found():
 def test_parameter_names_are_the_c_names(name):
     fn = getattr(acperf, name)
     ret, cparams = parse_headers()[fn.c_function]
-    inputs = [p for t, p in cparams if t in ("double", "const char*", "const acp_aircraft*")
-              or (t == "size_t" and p != "n") or (t == "const double*")]
+    # trace functions take (capacity, points, count) from the Python layer itself
+    inputs = [p for t, p in cparams if t in ("double", "const char*", "const acp_aircraft*", "int")
+              or (t == "size_t" and p not in ("n", "capacity")) or (t == "const double*")]
     assert list(inspect.signature(fn).parameters) == inputs
     assert fn.c_function.startswith("acp_" + name)
 
@@ -164,7 +177,7 @@ def test_scalar_and_array_paths_match_c(name, clib):
     for i, (ok, ref) in enumerate(expected):
         if ok:
             want = as_tuple(ref, fields)
-            assert all(same(o[i], w) for o, w in zip(outs, want)), (points[i], ref)
+            assert all(close(o[i], w) for o, w in zip(outs, want)), (points[i], ref)
         else:
             assert all(math.isnan(o[i]) for o in outs), points[i]
 

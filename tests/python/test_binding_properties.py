@@ -79,12 +79,15 @@ def test_geometric_geopotential_round_trip(z):
 def test_pressure_decreases_with_altitude(hp):
     hp = np.unique(hp)  # sorted, distinct
     p = acperf.isa(hp).pressure
-    assert np.all(np.diff(p) <= 0.0)
+    # never higher, to the vectorised kernel's rounding (1e-14 relative,
+    # docs/performance.md): altitudes a nanometre apart may tie within it
+    assert np.all(np.diff(p) <= 1e-14 * p[:-1])
     # strictly lower wherever the altitudes differ by a millimetre or more
     far = np.diff(hp) >= 1e-3
     assert np.all(np.diff(p)[far] < 0.0)
-    # the scalar path agrees with the array path point by point
-    assert [acperf.isa_pressure(h) for h in hp] == list(p)
+    # the scalar path agrees with the array path point by point (1e-14 relative)
+    scalar = np.array([acperf.isa_pressure(h) for h in hp])
+    assert np.all(np.abs(scalar - p) <= 1e-14 * p)
 
 
 @given(HP, st.floats(1.0, 5000.0))

@@ -31,8 +31,9 @@ from .friction import *  # noqa: F401,F403
 from .aircraft import Aircraft
 from ._polar import *  # noqa: F401,F403
 from ._speeds import *  # noqa: F401,F403
+from .performance import *  # noqa: F401,F403
 from . import atmosphere as _atmosphere, airspeed as _airspeed, friction as _friction
-from . import _polar, _speeds
+from . import _polar, _speeds, performance as _performance
 
 strerror = capi.acp_strerror
 version = capi.acp_version
@@ -41,4 +42,4 @@ __version__ = capi.acp_version_string()
 
 __all__ = ["AcperfError", "AcperfWarning", "Result", "capi", "units", "strerror", "version",
            "version_string", "Aircraft", *_atmosphere.__all__, *_airspeed.__all__,
-           *_friction.__all__, *_polar.__all__, *_speeds.__all__]
+           *_friction.__all__, *_polar.__all__, *_speeds.__all__, *_performance.__all__]

@@ -103,14 +103,15 @@ ACP_API int acp_aircraft_get(const acp_aircraft *ac, const char *key, double *va
 ACP_API int acp_aircraft_unset(acp_aircraft *ac, const char *key);
 
 /**
- * Set a text key: "name" (at most ACP_AIRCRAFT_NAME_MAX - 1 bytes, printable)
- * or "component.NAME.type" ("surface", "body", "nacelle", "other").
+ * Set a text key: "name" (at most ACP_AIRCRAFT_NAME_MAX - 1 bytes, printable),
+ * "engine_type" ("turbofan", "turboprop", "piston") or "component.NAME.type"
+ * ("surface", "body", "nacelle", "other").
  * @return ACP_OK; ACP_ERR_INVALID (NULL, bad text); ACP_ERR_UNKNOWN_KEY.
  */
 ACP_API int acp_aircraft_set_text(acp_aircraft *ac, const char *key, const char *value);
 
 /**
- * Read a text key ("name" or "component.NAME.type") into buf (len bytes).
+ * Read a text key ("name", "engine_type" or "component.NAME.type") into buf (len bytes).
  * An unset name reads as "". The text is cut to fit and always terminated.
  * @return ACP_OK; ACP_ERR_INVALID (NULL or len 0); ACP_ERR_UNKNOWN_KEY.
  */
@@ -119,7 +120,7 @@ ACP_API int acp_aircraft_get_text(const acp_aircraft *ac, const char *key, char 
 /**
  * The index-th key that has a value given (not a default), in a fixed
  * order: aircraft keys, then each component's fields (type first). Lets a
- * caller list or save a model. Text keys ("name", "component.X.type") are
+ * caller list or save a model. Text keys ("name", "engine_type", "component.X.type") are
  * included; read them with acp_aircraft_get_text().
  *
  * @param index 0, 1, 2, ...

@@ -1,0 +1,118 @@
+"""Speed schedules, engines, climb and descent (acperf/schedule.h,
+acperf/propulsion.h, acperf/climb.h).
+
+SI units as in C: altitudes m (pressure altitude), speeds m/s, masses kg,
+forces N, fuel flow kg/s, time s. Profiles and traces are Python objects whose
+fields are the C struct's field names; a trace's fields are numpy arrays that go
+straight into a pandas DataFrame (``trace.to_frame()``). Results are
+engineering estimates, not approved flight-manual data.
+"""
+
+import numpy as np
+
+from . import capi as _c
+from ._core import bind, model_handle, result_type
+
+__all__ = ["SchedulePoint", "EnginePoint", "ProfilePoint", "Profile", "CeilingSet",
+           "MODE_LOW_CAS", "MODE_CAS", "MODE_MACH", "MODE_VMO", "MODE_MMO",
+           "RATING_MAXIMUM", "RATING_CLIMB", "RATING_CRUISE", "RATING_IDLE",
+           "speed_schedule", "acceleration_factor", "turbofan_thrust_lapse", "turbofan_tsfc",
+           "piston_power_lapse", "engine_rating", "engine_thrust", "climb_point",
+           "descent_point", "climb", "descent", "climb_trace", "descent_trace", "ceilings"]
+
+MODE_LOW_CAS, MODE_CAS, MODE_MACH = _c.ACP_MODE_LOW_CAS, _c.ACP_MODE_CAS, _c.ACP_MODE_MACH
+MODE_VMO, MODE_MMO = _c.ACP_MODE_VMO, _c.ACP_MODE_MMO
+RATING_MAXIMUM, RATING_CLIMB = _c.ACP_RATING_MAXIMUM, _c.ACP_RATING_CLIMB
+RATING_CRUISE, RATING_IDLE = _c.ACP_RATING_CRUISE, _c.ACP_RATING_IDLE
+
+SchedulePoint = result_type(
+    "SchedulePoint",
+    ("mode", "cas", "mach", "tas", "crossover", "dtas_dhp", "acceleration_factor"),
+    "A speed schedule at one altitude (the fields of acp_schedule_point).")
+EnginePoint = result_type(
+    "EnginePoint", ("thrust", "fuel_flow", "tsfc", "shaft_power"),
+    "Thrust and fuel of all engines (the fields of acp_engine_point).")
+ProfilePoint = result_type(
+    "ProfilePoint",
+    ("time", "distance", "hp", "mass", "tas", "cas", "mach", "rate", "gradient", "thrust",
+     "drag", "fuel_flow", "acceleration_factor", "mode"),
+    "One point of a climb or descent (the fields of acp_profile_point); in a trace each "
+    "field is an array over the points.")
+Profile = result_type(
+    "Profile",
+    ("time", "distance", "fuel", "mass_end", "tas_end", "speed_change_time",
+     "speed_change_distance", "speed_change_fuel"),
+    "Totals of a climb or descent (the fields of acp_profile).")
+CeilingSet = result_type(
+    "CeilingSet",
+    ("service_ceiling", "max_climb_altitude", "buffet_altitude", "max_cruise_altitude",
+     "optimum_altitude"),
+    "Ceilings and optimum altitude at a mass (the fields of acp_ceiling_set).")
+
+_AC = ("ac",)
+
+speed_schedule = bind("speed_schedule", _c.acp_speed_schedule, None,
+                      ("hp", "dtemp", "cas_low", "hp_limit", "cas", "mach", "vmo", "mmo"),
+                      result=SchedulePoint)
+acceleration_factor = bind("acceleration_factor", _c.acp_acceleration_factor, None,
+                            ("mode", "mach", "hp", "dtemp"), {"dtemp": 0.0})
+turbofan_thrust_lapse = bind("turbofan_thrust_lapse", _c.acp_turbofan_thrust_lapse, None,
+                             ("mach", "hp", "dtemp", "throttle_ratio"))
+turbofan_tsfc = bind("turbofan_tsfc", _c.acp_turbofan_tsfc, None,
+                     ("mach", "hp", "dtemp", "c0", "c1"))
+piston_power_lapse = bind("piston_power_lapse", _c.acp_piston_power_lapse, None,
+                          ("density_ratio",))
+engine_rating = bind("engine_rating", _c.acp_engine_rating, None,
+                      ("ac", "rating", "hp", "dtemp", "tas"), result=EnginePoint, models=_AC)
+engine_thrust = bind("engine_thrust", _c.acp_engine_thrust, None,
+                     ("ac", "thrust", "hp", "dtemp", "tas"), result=EnginePoint, models=_AC)
+climb_point = bind("climb_point", _c.acp_climb_point, None,
+                   ("ac", "mass", "hp", "dtemp", "wind"), {"dtemp": 0.0, "wind": 0.0},
+                   result=ProfilePoint, models=_AC)
+descent_point = bind("descent_point", _c.acp_descent_point, None,
+                     ("ac", "mass", "hp", "dtemp", "wind"), {"dtemp": 0.0, "wind": 0.0},
+                     result=ProfilePoint, models=_AC)
+_PROFILE = ("ac", "mass", "hp_start", "hp_end", "dtemp", "wind", "step")
+_PROFILE_DEFAULTS = {"dtemp": 0.0, "wind": 0.0, "step": 0.0}
+climb = bind("climb", _c.acp_climb, None, _PROFILE, _PROFILE_DEFAULTS, result=Profile,
+             models=_AC)
+descent = bind("descent", _c.acp_descent, None, _PROFILE, _PROFILE_DEFAULTS, result=Profile,
+               models=_AC)
+ceilings = bind("ceilings", _c.acp_ceilings, None, ("ac", "mass", "dtemp"), {"dtemp": 0.0},
+                result=CeilingSet, models=_AC)
+
+
+def _trace(cfunc, ac, mass, hp_start, hp_end, dtemp, wind, step):
+    step_used = step if step else _c.ACP_CLIMB_STEP_DEFAULT
+    # An upper bound of the points: the steps, one more per segment cut, the start
+    # and the level speed change (12 points); the C function checks it.
+    capacity = int(abs(hp_end - hp_start) / max(step_used, 1.0)) + 32
+    points, totals = cfunc(model_handle(ac), float(mass), float(hp_start), float(hp_end),
+                           float(dtemp), float(wind), float(step), capacity)
+    points = np.asarray(points)
+    trace = ProfilePoint(*(points[:, i].copy() for i in range(points.shape[1])))
+    return trace, Profile(*(getattr(totals, f) for f in Profile._fields))
+
+
+def climb_trace(ac, mass, hp_start, hp_end, dtemp=0.0, wind=0.0, step=0.0):
+    """climb_trace(ac, mass, hp_start, hp_end, dtemp=0.0, wind=0.0, step=0.0)
+
+    A climb with its per-step trace: returns (trace, totals), the trace a
+    ProfilePoint of arrays (one element per point), the totals a Profile. Raises
+    AcperfError as acp_climb_trace does. Estimates, not approved data.
+    """
+    return _trace(_c.acp_climb_trace, ac, mass, hp_start, hp_end, dtemp, wind, step)
+
+
+def descent_trace(ac, mass, hp_start, hp_end, dtemp=0.0, wind=0.0, step=0.0):
+    """descent_trace(ac, mass, hp_start, hp_end, dtemp=0.0, wind=0.0, step=0.0)
+
+    An idle descent with its per-step trace: (trace, totals) as climb_trace().
+    """
+    return _trace(_c.acp_descent_trace, ac, mass, hp_start, hp_end, dtemp, wind, step)
+
+
+climb_trace.c_function = "acp_climb_trace"
+climb_trace.c_array_function = None
+descent_trace.c_function = "acp_descent_trace"
+descent_trace.c_array_function = None

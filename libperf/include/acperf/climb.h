@@ -1,0 +1,140 @@
+/**
+ * @file acperf/climb.h
+ * @brief Climb and descent: rate of climb at a point, profiles along the
+ *        aircraft's speed schedules with wind, per-step traces, ceilings.
+ *
+ * Method (docs/methods/climb.md): the energy equation
+ * dh/dt = (T - D) V/(m g f) with f the acceleration factor of the schedule
+ * (acperf/schedule.h), lift = weight (small path angles, common practice),
+ * thrust and fuel flow from acperf/propulsion.h (climb: maximum-climb rating;
+ * descent: flight idle), drag from acperf/polar.h. Pressure altitude changes
+ * at (Tstd/T) dh/dt. The profile is integrated in steps of pressure altitude
+ * with the trapezoidal rule on dt/dhp, dm/dhp and dx/dhp and a predicted end
+ * mass (second order); the level acceleration (climb) or deceleration
+ * (descent) between the low-altitude CAS and the schedule's CAS happens at the
+ * speed-limit altitude, integrated in steps of TAS from dV/dt = (T - D)/m.
+ * Ground distance uses the along-track wind component: V cos(gamma) + wind.
+ *
+ * Aircraft keys used: engine keys, climb_cas, climb_mach, descent_cas,
+ * descent_mach, speed_limit_cas, speed_limit_altitude, vmo, mmo (when given).
+ */
+#ifndef ACPERF_CLIMB_H
+#define ACPERF_CLIMB_H
+
+#include <stddef.h>
+#include "acperf/aircraft.h"
+#include "acperf/export.h"
+#include "acperf/schedule.h"
+
+#define ACP_CLIMB_STEP_DEFAULT 609.6 /**< default pressure-altitude step, m (2,000 ft): Simpson steps cut at every kink (docs/methods/climb.md) */
+
+ACP_BEGIN_DECLS
+
+/** One point of a climb or descent. All doubles. Append-only. */
+typedef struct {
+  double time;                /**< s since the start */
+  double distance;            /**< ground distance since the start, m */
+  double hp;                  /**< pressure altitude, m */
+  double mass;                /**< kg */
+  double tas;                 /**< m/s */
+  double cas;                 /**< m/s */
+  double mach;
+  double rate;                /**< rate of change of pressure altitude, m/s (negative descending) */
+  double gradient;            /**< flight-path angle, rad (geometric) */
+  double thrust;              /**< N, all engines */
+  double drag;                /**< N */
+  double fuel_flow;           /**< kg/s */
+  double acceleration_factor; /**< f of the schedule (0 marks a level speed change) */
+  double mode;                /**< acp_schedule_mode of the schedule at this point */
+} acp_profile_point;
+
+/** Totals of a climb or descent. All doubles. Append-only. */
+typedef struct {
+  double time;       /**< s */
+  double distance;   /**< ground distance, m */
+  double fuel;       /**< kg */
+  double mass_end;   /**< kg */
+  double tas_end;    /**< m/s */
+  double speed_change_time;     /**< s of the level acceleration/deceleration at the limit altitude */
+  double speed_change_distance; /**< m of it */
+  double speed_change_fuel;     /**< kg of it */
+} acp_profile;
+
+/** Ceilings and optimum altitude at a mass. All doubles. Append-only. */
+typedef struct {
+  double service_ceiling;      /**< pressure altitude (m) where the climb rate falls to 100 ft/min */
+  double max_climb_altitude;   /**< where it falls to 300 ft/min (common practice) */
+  double buffet_altitude;      /**< highest altitude with a 1.3 g margin to buffet at cruise_mach */
+  double max_cruise_altitude;  /**< lowest of max_climb_altitude, buffet_altitude, max_altitude */
+  double optimum_altitude;     /**< altitude of the greatest specific air range at cruise_mach */
+} acp_ceiling_set;
+
+/**
+ * The climb at a point of the climb schedule (maximum-climb thrust).
+ *
+ * @param ac    aircraft with drag, engine and climb-schedule keys
+ * @param mass  kg; hp pressure altitude (m); dtemp ISA deviation (K)
+ * @param wind  along-track wind component (m/s), positive tailwind
+ * @param out   out: the point (time and distance 0); NaN on error
+ * @return ACP_OK (the rate may be negative: no climb possible there);
+ *         ACP_ERR_INVALID (NULL, NaN/Inf, missing keys); ACP_ERR_RANGE.
+ */
+ACP_API int acp_climb_point(const acp_aircraft *ac, double mass, double hp, double dtemp,
+                            double wind, acp_profile_point *out);
+
+/** The same on the descent schedule at flight idle. */
+ACP_API int acp_descent_point(const acp_aircraft *ac, double mass, double hp, double dtemp,
+                              double wind, acp_profile_point *out);
+
+/**
+ * Climb from hp_start to hp_end (> hp_start) along the climb schedule.
+ *
+ * @param step  pressure-altitude step (m), 10 to 1,000; 0 for ACP_CLIMB_STEP_DEFAULT
+ * @param out   out: totals; NaN on error
+ * @return ACP_OK; ACP_ERR_INVALID; ACP_ERR_RANGE (altitudes outside the
+ *         model, speeds beyond the drag model); ACP_ERR_THRUST (the climb rate
+ *         reaches zero before hp_end: the altitude cannot be reached).
+ */
+ACP_API int acp_climb(const acp_aircraft *ac, double mass, double hp_start, double hp_end,
+                      double dtemp, double wind, double step, acp_profile *out);
+
+/**
+ * acp_climb() with a per-step trace. The number of points is known before the
+ * integration: when `capacity` is smaller, nothing is integrated, `*count`
+ * gives the number needed and the status is ACP_ERR_RANGE.
+ *
+ * @param points   capacity points out (first: the start; last: hp_end)
+ * @param count    out: number of points written (or needed)
+ */
+ACP_API int acp_climb_trace(const acp_aircraft *ac, double mass, double hp_start,
+                            double hp_end, double dtemp, double wind, double step,
+                            size_t capacity, acp_profile_point *points, size_t *count,
+                            acp_profile *out);
+
+/** Descent from hp_start down to hp_end (< hp_start) at flight idle along the descent schedule. */
+ACP_API int acp_descent(const acp_aircraft *ac, double mass, double hp_start, double hp_end,
+                        double dtemp, double wind, double step, acp_profile *out);
+
+/** acp_descent() with a per-step trace, as acp_climb_trace(). */
+ACP_API int acp_descent_trace(const acp_aircraft *ac, double mass, double hp_start,
+                              double hp_end, double dtemp, double wind, double step,
+                              size_t capacity, acp_profile_point *points, size_t *count,
+                              acp_profile *out);
+
+/**
+ * Ceilings at a mass: the altitudes where the climb rate along the climb
+ * schedule falls to 100 ft/min (service ceiling) and 300 ft/min, where the
+ * lift coefficient at 1.3 g and cruise_mach reaches cl_buffet (cl_max when
+ * cl_buffet is not given), the resulting maximum cruise altitude and the
+ * optimum altitude for specific air range at cruise_mach (common practice for
+ * the 100 and 300 ft/min and 1.3 g margins).
+ *
+ * @return ACP_OK (a ceiling above the search range, 25,000 m, is NaN);
+ *         ACP_ERR_INVALID; ACP_ERR_RANGE; ACP_ERR_THRUST (no climb at all at
+ *         the lowest altitude).
+ */
+ACP_API int acp_ceilings(const acp_aircraft *ac, double mass, double dtemp, acp_ceiling_set *out);
+
+ACP_END_DECLS
+
+#endif /* ACPERF_CLIMB_H */

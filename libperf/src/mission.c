@@ -1,0 +1,328 @@
+/* Trip fuel: climb + cruise + descent, fuel policy, take-off mass for a zero-fuel mass. */
+#include "acperf/mission.h"
+
+#include <stdlib.h>
+#include <string.h>
+
+#include "acperf/climb.h"
+#include "acperf/cruise.h"
+#include "acperf/propulsion.h"
+#include "acperf/status.h"
+#include "aircraft_internal.h"
+#include "internal.h"
+#include "performance_internal.h"
+
+#define TOD_ITERATIONS 20      /* top-of-descent iterations */
+#define TOD_TOL 1.0            /* m: the descent's distance settles */
+#define ZFM_ITERATIONS 30      /* take-off mass iterations */
+#define ZFM_TOL 0.1            /* kg: zero-fuel mass match (issue 4) */
+#define TAXI_SPEED 5.0         /* m/s (about 10 kt) for the idle fuel flow of taxiing */
+
+enum mkey {
+  MK_DISTANCE,
+  MK_CRUISE_ALTITUDE,
+  MK_ORIGIN_ALTITUDE,
+  MK_DESTINATION_ALTITUDE,
+  MK_ISA_DEVIATION,
+  MK_WIND,
+  MK_CRUISE_MODE,
+  MK_COST_INDEX,
+  MK_STEP_CLIMB,
+  MK_CLIMB_STEP,
+  MK_CRUISE_STEP,
+  MK_TAXI_TIME,
+  MK_TAXI_FUEL,
+  MK_CONTINGENCY_FRACTION,
+  MK_CONTINGENCY_MINIMUM,
+  MK_ALTERNATE_FUEL,
+  MK_FINAL_RESERVE_TIME,
+  MK_HOLDING_HEIGHT,
+  MK_COUNT
+};
+
+#define MF_ZERO_OR_RANGE 1u /* 0 is allowed besides [lo, hi] */
+#define MF_INTEGER 2u
+
+typedef struct {
+  const char *name;
+  double lo, hi, def;
+  unsigned flags;
+} mkeydef;
+
+static const mkeydef MKEYS[MK_COUNT] = {
+    [MK_DISTANCE] = {"distance", 1000.0, 2.0e7, ACP_NAN, 0},
+    [MK_CRUISE_ALTITUDE] = {"cruise_altitude", 0.0, 25000.0, ACP_NAN, 0},
+    [MK_ORIGIN_ALTITUDE] = {"origin_altitude", -500.0, 5000.0, 0.0, 0},
+    [MK_DESTINATION_ALTITUDE] = {"destination_altitude", -500.0, 5000.0, 0.0, 0},
+    [MK_ISA_DEVIATION] = {"isa_deviation", -60.0, 60.0, 0.0, 0},
+    [MK_WIND] = {"wind", -100.0, 100.0, 0.0, 0},
+    [MK_CRUISE_MODE] = {"cruise_mode", ACP_CRUISE_FIXED_MACH, ACP_CRUISE_MAX_ENDURANCE,
+                        ACP_CRUISE_FIXED_MACH, MF_INTEGER},
+    [MK_COST_INDEX] = {"cost_index", 0.0, 1000.0, 0.0, 0},
+    [MK_STEP_CLIMB] = {"step_climb", 100.0, 3000.0, 0.0, MF_ZERO_OR_RANGE},
+    [MK_CLIMB_STEP] = {"climb_step", 10.0, 1000.0, 0.0, MF_ZERO_OR_RANGE},
+    [MK_CRUISE_STEP] = {"cruise_step", 100.0, 1.0e6, 0.0, MF_ZERO_OR_RANGE},
+    [MK_TAXI_TIME] = {"taxi_time", 0.0, 7200.0, ACP_TAXI_TIME_TYPICAL, 0},
+    [MK_TAXI_FUEL] = {"taxi_fuel", 0.0, 1.0e5, ACP_NAN, 0},
+    [MK_CONTINGENCY_FRACTION] = {"contingency_fraction", 0.0, 0.5, ACP_CONTINGENCY_FRACTION_TYPICAL,
+                                 0},
+    [MK_CONTINGENCY_MINIMUM] = {"contingency_minimum", 0.0, 1.0e5, 0.0, 0},
+    [MK_ALTERNATE_FUEL] = {"alternate_fuel", 0.0, 1.0e6, 0.0, 0},
+    [MK_FINAL_RESERVE_TIME] = {"final_reserve_time", 0.0, 14400.0, ACP_FINAL_RESERVE_TIME_TYPICAL,
+                               0},
+    [MK_HOLDING_HEIGHT] = {"holding_height", 0.0, 10000.0, ACP_HOLDING_HEIGHT_TYPICAL, 0},
+};
+
+struct acp_mission {
+  double v[MK_COUNT];
+};
+
+acp_mission *acp_mission_new(void) {
+  acp_mission *m = malloc(sizeof *m);
+  if (!m) return NULL;
+  for (int k = 0; k < MK_COUNT; ++k) m->v[k] = MKEYS[k].def;
+  return m;
+}
+
+void acp_mission_free(acp_mission *mission) { free(mission); }
+
+static int find(const char *key) {
+  for (int k = 0; k < MK_COUNT; ++k)
+    if (strcmp(key, MKEYS[k].name) == 0) return k;
+  return -1;
+}
+
+int acp_mission_set(acp_mission *mission, const char *key, double value) {
+  if (!mission || !key) return ACP_ERR_INVALID;
+  const int k = find(key);
+  if (k < 0) return ACP_ERR_UNKNOWN_KEY;
+  const mkeydef *d = &MKEYS[k];
+  if (!isfinite(value) || ((d->flags & MF_INTEGER) && value != floor(value)))
+    return ACP_ERR_INVALID;
+  if (!acp_in_range(value, d->lo, d->hi) && !((d->flags & MF_ZERO_OR_RANGE) && value == 0.0))
+    return ACP_ERR_RANGE;
+  mission->v[k] = value;
+  return ACP_OK;
+}
+
+int acp_mission_get(const acp_mission *mission, const char *key, double *value) {
+  if (!value) return ACP_ERR_INVALID;
+  *value = ACP_NAN;
+  if (!mission || !key) return ACP_ERR_INVALID;
+  const int k = find(key);
+  if (k < 0) return ACP_ERR_UNKNOWN_KEY;
+  *value = mission->v[k];
+  return ACP_OK;
+}
+
+/* ---- the trip ------------------------------------------------------------ */
+
+static void result_nan(acp_trip_result *o) {
+  double *f = (double *)o;
+  for (size_t i = 0; i < sizeof *o / sizeof(double); ++i) f[i] = ACP_NAN;
+}
+
+/* An infeasible trip: everything NaN but the reason and the excess. */
+static int infeasible(acp_trip_result *o, int st, int why, double excess) {
+  result_nan(o);
+  o->infeasible = why;
+  o->excess = excess;
+  return st;
+}
+
+static int taxi_fuel(const acp_aircraft *ac, const acp_mission *ms, double *fuel) {
+  if (!isnan(ms->v[MK_TAXI_FUEL])) {
+    *fuel = ms->v[MK_TAXI_FUEL];
+    return ACP_OK;
+  }
+  acp_engine_point e;
+  const int st = acp_engine_rating(ac, ACP_RATING_IDLE, ms->v[MK_ORIGIN_ALTITUDE],
+                                   ms->v[MK_ISA_DEVIATION], TAXI_SPEED, &e);
+  *fuel = ms->v[MK_TAXI_TIME] * e.fuel_flow;
+  return st;
+}
+
+/* Climb, cruise to the top of descent, descent (no mass limits checked). */
+static int fly(const acp_aircraft *ac, const acp_mission *ms, double tow, acp_trip_result *o) {
+  const double *v = ms->v;
+  const double dist = v[MK_DISTANCE], hc = v[MK_CRUISE_ALTITUDE];
+  const double ho = v[MK_ORIGIN_ALTITUDE], hd = v[MK_DESTINATION_ALTITUDE];
+  const double dtemp = v[MK_ISA_DEVIATION], wind = v[MK_WIND];
+  const int mode = (int)v[MK_CRUISE_MODE];
+  if (hc <= fmax(ho, hd))
+    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_CRUISE_TOO_LOW, fmax(ho, hd) - hc);
+  const double top = ac_value(ac, AK_MAX_ALTITUDE);
+  if (hc > top) return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_ABOVE_MAX_ALTITUDE, hc - top);
+  acp_profile cl, de;
+  acp_cruise_result cr;
+  int st = acp_climb(ac, tow, ho, hc, dtemp, wind, v[MK_CLIMB_STEP], &cl);
+  if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CLIMB, ACP_NAN);
+  if (st != ACP_OK) return st;
+  /* Top of descent: descend from the cruise's end mass and level; the cruise
+     distance follows. Settled when the descent's distance changes by less
+     than TOD_TOL metres at the same level: the last cruise stands. */
+  double m_tod = cl.mass_end, h_tod = hc, d_desc = ACP_NAN;
+  cr.hp_end = hc;
+  int settled = 0;
+  for (int k = 0; k < TOD_ITERATIONS; ++k) {
+    st = acp_descent(ac, m_tod, h_tod, hd, dtemp, wind, v[MK_CLIMB_STEP], &de);
+    if (st != ACP_OK) return st;
+    if (fabs(de.distance - d_desc) < TOD_TOL && h_tod == cr.hp_end) {
+      settled = 1;
+      break;
+    }
+    d_desc = de.distance;
+    const double d_cruise = dist - cl.distance - de.distance;
+    if (d_cruise < 0.0) return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_TOO_SHORT, -d_cruise);
+    if (d_cruise < 1.0) { /* no cruise to speak of */
+      cr.time = cr.distance = cr.fuel = 0.0;
+      cr.mass_end = cl.mass_end;
+      cr.hp_end = hc;
+      cr.sar_mean = ACP_NAN;
+    } else {
+      st = acp_cruise(ac, mode, v[MK_COST_INDEX], cl.mass_end, hc, dtemp, wind,
+                      ACP_CRUISE_END_DISTANCE, d_cruise, v[MK_CRUISE_STEP], v[MK_STEP_CLIMB], &cr);
+      if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CRUISE, ACP_NAN);
+      if (st != ACP_OK) return st;
+    }
+    m_tod = cr.mass_end;
+    h_tod = cr.hp_end;
+  }
+  if (!settled) return ACP_ERR_NO_CONVERGENCE;
+  o->takeoff_mass = tow;
+  o->landing_mass = de.mass_end;
+  o->trip_fuel = tow - de.mass_end;
+  o->trip_time = cl.time + cr.time + de.time;
+  o->climb_time = cl.time;
+  o->climb_distance = cl.distance;
+  o->climb_fuel = cl.fuel;
+  o->cruise_time = cr.time;
+  o->cruise_distance = cr.distance;
+  o->cruise_fuel = cr.fuel;
+  o->descent_time = de.time;
+  o->descent_distance = de.distance;
+  o->descent_fuel = de.fuel;
+  o->top_of_climb_mass = cl.mass_end;
+  o->top_of_descent_mass = m_tod;
+  o->cruise_altitude_end = h_tod;
+  o->cruise_sar_mean = cr.sar_mean;
+  return ACP_OK;
+}
+
+/* The fuel policy on a flown trip: reserves, zero-fuel mass, block fuel. */
+static int reserves(const acp_aircraft *ac, const acp_mission *ms, acp_trip_result *o) {
+  const double *v = ms->v;
+  o->contingency_fuel = fmax(v[MK_CONTINGENCY_FRACTION] * o->trip_fuel, v[MK_CONTINGENCY_MINIMUM]);
+  o->alternate_fuel = v[MK_ALTERNATE_FUEL];
+  const double m_hold = o->landing_mass - o->contingency_fuel - o->alternate_fuel;
+  if (!(m_hold > ACP_POLAR_MASS_MIN))
+    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_NO_FUEL, ACP_POLAR_MASS_MIN - m_hold);
+  double fr = 0.0;
+  if (v[MK_FINAL_RESERVE_TIME] > 0.0) {
+    acp_cruise_result h;
+    const int st = acp_cruise(ac, ACP_CRUISE_MAX_ENDURANCE, 0.0, m_hold,
+                              v[MK_DESTINATION_ALTITUDE] + v[MK_HOLDING_HEIGHT],
+                              v[MK_ISA_DEVIATION], 0.0, ACP_CRUISE_END_TIME,
+                              v[MK_FINAL_RESERVE_TIME], 0.0, 0.0, &h);
+    if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CRUISE, ACP_NAN);
+    if (st != ACP_OK) return st;
+    fr = h.fuel;
+  }
+  o->final_reserve_fuel = fr;
+  o->zero_fuel_mass = m_hold - fr;
+  double taxi;
+  const int st = taxi_fuel(ac, ms, &taxi);
+  if (st != ACP_OK) return st;
+  o->taxi_fuel = taxi;
+  o->ramp_mass = o->takeoff_mass + taxi;
+  o->takeoff_fuel = o->trip_fuel + o->contingency_fuel + o->alternate_fuel + fr;
+  o->block_fuel = taxi + o->takeoff_fuel;
+  o->block_time = v[MK_TAXI_TIME] + o->trip_time;
+  o->infeasible = ACP_TRIP_FEASIBLE;
+  o->excess = ACP_NAN;
+  o->iterations = 1.0;
+  return ACP_OK;
+}
+
+static int trip_at(const acp_aircraft *ac, const acp_mission *ms, double tow, acp_trip_result *o) {
+  if (!acp_in_range(tow, ACP_POLAR_MASS_MIN, ACP_POLAR_MASS_MAX)) return ACP_ERR_RANGE;
+  int st = fly(ac, ms, tow, o);
+  if (st == ACP_OK) st = reserves(ac, ms, o);
+  return st;
+}
+
+/* Limits of the aircraft on a computed trip (keys that are given). */
+static int limits(const acp_aircraft *ac, acp_trip_result *o) {
+  const double mtow = ac_value(ac, AK_MASS_MAX_TAKEOFF), mlw = ac_value(ac, AK_MASS_MAX_LANDING);
+  const double mzfw = ac_value(ac, AK_MASS_MAX_ZERO_FUEL), cap = ac_value(ac, AK_FUEL_CAPACITY);
+  if (o->zero_fuel_mass <= 0.0)
+    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_NO_FUEL, -o->zero_fuel_mass);
+  if (o->takeoff_mass > mtow)
+    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_TAKEOFF, o->takeoff_mass - mtow);
+  if (o->landing_mass > mlw)
+    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_LANDING, o->landing_mass - mlw);
+  if (o->zero_fuel_mass > mzfw)
+    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_ZERO_FUEL, o->zero_fuel_mass - mzfw);
+  if (o->block_fuel > cap)
+    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_OVER_FUEL_CAPACITY, o->block_fuel - cap);
+  return ACP_OK;
+}
+
+static int check(const acp_aircraft *ac, const acp_mission *ms, double mass,
+                 acp_trip_result *out) {
+  if (!out) return ACP_ERR_INVALID;
+  result_nan(out);
+  if (!ac || !ms || !isfinite(mass)) return ACP_ERR_INVALID;
+  if (isnan(ms->v[MK_DISTANCE]) || isnan(ms->v[MK_CRUISE_ALTITUDE])) return ACP_ERR_INVALID;
+  if (perf_check(ac, NULL, 0) != ACP_OK) return ACP_ERR_INVALID;
+  if ((int)ms->v[MK_CRUISE_MODE] == ACP_CRUISE_FIXED_MACH && isnan(ac_value(ac, AK_CRUISE_MACH)))
+    return ACP_ERR_INVALID;
+  return acp_in_range(mass, ACP_POLAR_MASS_MIN, ACP_POLAR_MASS_MAX) ? ACP_OK : ACP_ERR_RANGE;
+}
+
+int acp_trip(const acp_aircraft *ac, const acp_mission *mission, double takeoff_mass,
+             acp_trip_result *out) {
+  int st = check(ac, mission, takeoff_mass, out);
+  if (st != ACP_OK) return st;
+  const double mtow = ac_value(ac, AK_MASS_MAX_TAKEOFF);
+  if (takeoff_mass > mtow)
+    return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_TAKEOFF, takeoff_mass - mtow);
+  st = trip_at(ac, mission, takeoff_mass, out);
+  if (st == ACP_OK) st = limits(ac, out);
+  if (st != ACP_OK && isnan(out->infeasible)) result_nan(out);
+  return st;
+}
+
+int acp_trip_for_zero_fuel_mass(const acp_aircraft *ac, const acp_mission *mission,
+                                double zero_fuel_mass, acp_trip_result *out) {
+  int st = check(ac, mission, zero_fuel_mass, out);
+  if (st != ACP_OK) return st;
+  const double mzfw = ac_value(ac, AK_MASS_MAX_ZERO_FUEL);
+  if (zero_fuel_mass > mzfw)
+    return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_ZERO_FUEL, zero_fuel_mass - mzfw);
+  /* g(tow) = zero-fuel mass of the trip flown from tow, less the wanted one;
+     g rises with tow at a slope a little below 1. Start from below (the
+     take-off mass is at least the zero-fuel mass plus the alternate fuel). */
+  double tow = zero_fuel_mass + mission->v[MK_ALTERNATE_FUEL], tow_prev = ACP_NAN,
+         g_prev = ACP_NAN;
+  for (int k = 1; k <= ZFM_ITERATIONS; ++k) {
+    st = trip_at(ac, mission, tow, out);
+    if (st != ACP_OK) {
+      if (isnan(out->infeasible)) result_nan(out);
+      return st;
+    }
+    const double g = out->zero_fuel_mass - zero_fuel_mass;
+    if (fabs(g) < ZFM_TOL) {
+      out->iterations = k;
+      st = limits(ac, out);
+      if (st != ACP_OK && isnan(out->infeasible)) result_nan(out);
+      return st;
+    }
+    const double slope = isnan(g_prev) || g == g_prev ? 1.0 : (g - g_prev) / (tow - tow_prev);
+    tow_prev = tow;
+    g_prev = g;
+    tow -= g / (slope > 0.1 ? slope : 1.0);
+  }
+  result_nan(out);
+  return ACP_ERR_NO_CONVERGENCE;
+}
