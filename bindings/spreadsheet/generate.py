@@ -171,7 +171,7 @@ def vba_param(ctype, name):
         return f"ByVal {n} As String"
     if ctype == "char*":
         return f"ByVal {n} As String"
-    if ctype.endswith("acp_aircraft*"):
+    if ctype.endswith(("acp_aircraft*", "acp_mission*")):  # opaque model handles
         return f"ByVal {n} As LongPtr"
     if ctype.endswith("*"):  # double arrays, out-pointers, output structs of doubles
         return f"ByRef {n} As Double"
@@ -181,6 +181,7 @@ def vba_param(ctype, name):
 def vba_return(ctype):
     return {"double": " As Double", "int": " As Long", "size_t": " As LongPtr",
             "const char*": " As LongPtr", "acp_aircraft*": " As LongPtr",
+            "acp_mission*": " As LongPtr",
             "void": ""}[ctype]
 
 
@@ -310,7 +311,7 @@ Private Function acpAircraft(ByVal params As Variant, ByRef msg As String) As Lo
         If IsEmpty(arr(r, LBound(arr, 2))) And IsEmpty(val) Then GoTo NextRow
         If VarType(arr(r, LBound(arr, 2))) <> vbString Then msg = "a key is not text": GoTo Fail
         key = Trim$(arr(r, LBound(arr, 2)))
-        If key = "name" Or (Left$(key, 10) = "component." And Right$(key, 5) = ".type") Then
+        If key = "name" Or key = "engine_type" Or (Left$(key, 10) = "component." And Right$(key, 5) = ".type") Then
             If VarType(val) <> vbString Then msg = key & " needs text": GoTo Fail
             st = c_acp_aircraft_set_text(ac, key, Trim$(val))
         Else

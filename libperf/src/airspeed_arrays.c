@@ -11,6 +11,7 @@
 #include "vector_math.h"
 
 #define RATIO_MACH1 0.89292915873785409 /* qc/p at Mach 1: 1.2^3.5 - 1 */
+#define TINY 1e-100 /* below it a Mach or speed ratio squared loses digits to underflow */
 
 /* (1 + y)^3.5 - 1 without cancellation at small y: with s = sqrt(1 + y),
    ((1 + y)^3 - 1) s + (s - 1), and s - 1 = y/(1 + s). */
@@ -37,7 +38,10 @@ static void to_mach(quantity q, size_t n, const double *in, const double *t, con
     for (size_t i = 0; i < n; ++i) {
       const double v = in[i] * (1.0 / ACP_A0);
       const double r = pow35_minus_1(0.2 * v * v) * ACP_P0 / p[i];
-      const double bad = ((v >= 0.0) & (v <= 1.0) & (r <= RATIO_MACH1)) ? 0.0 : ACP_NAN;
+      /* the input's own sign: a negative denormal scales to -0; below 1e-100
+         (speeds of no physical meaning) v^2 underflows: the scalar form decides */
+      const double bad = ((in[i] >= 0.0) & ((v == 0.0) | (v > TINY)) & (v <= 1.0) &
+                          (r <= RATIO_MACH1)) ? 0.0 : ACP_NAN;
       mach[i] = subsonic_mach(bad == 0.0 ? r : 0.0) + bad;
     }
     break;
@@ -45,14 +49,14 @@ static void to_mach(quantity q, size_t n, const double *in, const double *t, con
 #pragma omp simd
     for (size_t i = 0; i < n; ++i) {
       const double m = in[i] / sqrt(ACP_GAMMA * ACP_R_AIR * t[i]);
-      mach[i] = m + (((m >= 0.0) & (m <= ACP_MACH_MAX)) ? 0.0 : ACP_NAN);
+      mach[i] = m + (((in[i] >= 0.0) & (m <= ACP_MACH_MAX)) ? 0.0 : ACP_NAN);
     }
     break;
   case Q_EAS:
 #pragma omp simd
     for (size_t i = 0; i < n; ++i) {
       const double m = in[i] / sqrt(ACP_GAMMA * p[i] / ACP_RHO0);
-      mach[i] = m + 0.0 * t[i] + (((m >= 0.0) & (m <= ACP_MACH_MAX)) ? 0.0 : ACP_NAN);
+      mach[i] = m + 0.0 * t[i] + (((in[i] >= 0.0) & (m <= ACP_MACH_MAX)) ? 0.0 : ACP_NAN);
     }
     break;
   case Q_MACH:
@@ -75,7 +79,8 @@ static void from_mach(quantity q, size_t n, const double *mach, const double *t,
     for (size_t i = 0; i < n; ++i) {
       const double m = mach[i];
       const double r0 = pow35_minus_1(0.2 * m * m) * p[i] * (1.0 / ACP_P0);
-      const double bad = ((m <= 1.0) & (r0 <= RATIO_MACH1)) ? 0.0 : ACP_NAN;
+      const double bad = (((m == 0.0) | (m > TINY)) & (m <= 1.0) & (r0 <= RATIO_MACH1))
+                             ? 0.0 : ACP_NAN;
       out[i] = ACP_A0 * subsonic_mach(bad == 0.0 ? r0 : 0.0) + bad;
     }
     break;

@@ -62,6 +62,8 @@ void contract_close(contract *c, const char *fn, const char *what, double a, dou
                     double abs_tol, double rel_tol);
 /* Same bits (NaN == NaN), else a violation: a form and its twin must agree exactly. */
 void contract_same(contract *c, const char *fn, const char *what, double a, double b);
+/* An array form's element against its scalar form: 1e-14 relative, NaN for NaN. */
+void contract_element(contract *c, const char *fn, const char *what, double a, double b);
 
 #define ST(code) (1u << (code))
 

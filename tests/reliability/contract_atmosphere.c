@@ -93,7 +93,7 @@ static void check_isa_n(contract *c) {
     const double f[6] = {a.temperature, a.pressure, a.density,
                          a.sound_speed, a.dynamic_viscosity, a.kinematic_viscosity};
     for (int k = 0; k < 6; ++k)
-      if (outs[k]) contract_same(c, "acp_isa_n", "element vs acp_isa", outs[k][i], f[k]);
+      if (outs[k]) contract_element(c, "acp_isa_n", "element vs acp_isa", outs[k][i], f[k]);
   }
   c->calls++;
   contract_record(c, (double)bad);

@@ -53,7 +53,7 @@ def aircraft(rows):
     if not keys:
         raise Invalid("empty")
     for k, v in keys:
-        textual = k == "name" or (k.startswith("component.") and k.endswith(".type"))
+        textual = k in ("name", "engine_type") or (k.startswith("component.") and k.endswith(".type"))
         if textual != isinstance(v, str) or v is None:
             raise Invalid(k)
         try:

@@ -20,7 +20,7 @@ _TEXT_KEYS_SUFFIX = ".type"
 
 
 def _is_text_key(key):
-    return key == "name" or (key.startswith("component.") and key.endswith(_TEXT_KEYS_SUFFIX))
+    return key in ("name", "engine_type") or (key.startswith("component.") and key.endswith(_TEXT_KEYS_SUFFIX))
 
 
 class Aircraft:

@@ -18,7 +18,7 @@ except ImportError:  # pragma: no cover - numpy is a dependency of capi itself
 
 # Status codes of acperf/status.h that mean "the input is wrong": #VALUE!.
 _INVALID_STATUSES = {capi.ACP_ERR_INVALID, capi.ACP_ERR_PARSE, capi.ACP_ERR_UNKNOWN_KEY}
-_TEXT_KEYS = ("name",)
+_TEXT_KEYS = ("name", "engine_type")
 
 
 class InvalidInput(Exception):
