@@ -386,8 +386,11 @@ static void test_step_climbs(void **state) {
                                     ACP_CRUISE_END_DISTANCE, dist, 0, dh, 200, pts, &count, &tr),
                    ACP_OK);
   CHECK_CLOSE(tr.fuel, step.fuel, 0.0, 0.0, "trace agrees");
-  assert_true(count <= 151 + 4); /* ceil(1500/10) + 1 + (37,000 - 29,000)/2,000 */
-  CHECK_CLOSE(count, 150 - floor(step.step_climb_distance / (10 * ACP_NM)) + 1 + step.step_climbs,
+  const double s_nm = ACP_CRUISE_STEP_DISTANCE_DEFAULT / ACP_NM;
+  /* at most ceil(1500/step) + 1 + (37,000 - 29,000)/2,000 */
+  assert_true((double)count <= ceil(1500 / s_nm) + 1 + 4);
+  CHECK_CLOSE(count, ceil(1500 / s_nm) - floor(step.step_climb_distance / ACP_CRUISE_STEP_DISTANCE_DEFAULT) + 1 +
+                         step.step_climbs,
               1.0, 0.0, "points: steps + 1 + climbs");
   CHECK_CLOSE(pts[count - 1].distance, dist, 1e-6, 0.0, "trace ends at the distance");
   CHECK_CLOSE(pts[count - 1].hp, step.hp_end, 0.0, 0.0, "trace ends at the last level");
