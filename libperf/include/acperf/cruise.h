@@ -37,8 +37,8 @@
 #include "acperf/aircraft.h"
 #include "acperf/export.h"
 
-/** Default cruise integration step over a distance, m (10 NM). */
-#define ACP_CRUISE_STEP_DISTANCE_DEFAULT 18520.0
+/** Default cruise integration step over a distance, m (50 NM). */
+#define ACP_CRUISE_STEP_DISTANCE_DEFAULT 92600.0
 /** Default step over a fuel amount, kg. */
 #define ACP_CRUISE_STEP_FUEL_DEFAULT 100.0
 /** Default step over a time, s (5 min). */

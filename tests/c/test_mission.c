@@ -1,0 +1,372 @@
+/* Trip fuel: bookkeeping of the phases and the fuel policy, recomposition
+   from the public climb/cruise/descent functions, the zero-fuel-mass
+   iteration, rules of thumb as sanity bands (marked common practice), and
+   every infeasible mission and bad argument as a named error. */
+#include "check.h"
+
+#include <acperf.h>
+
+static acp_aircraft *load_example(const char *name) {
+  char path[512], err[256];
+  snprintf(path, sizeof path, "%s/aircraft/%s", ACP_EXAMPLES_DIR, name);
+  acp_aircraft *ac = acp_aircraft_new();
+  assert_non_null(ac);
+  const int st = acp_aircraft_load(ac, path, err, sizeof err);
+  if (st != ACP_OK) print_error("%s: %s\n", path, err);
+  assert_int_equal(st, ACP_OK);
+  return ac;
+}
+
+/* The invented operator's standard sector: 500 NM at FL350. */
+static acp_mission *sector(double nm, double fl) {
+  acp_mission *m = acp_mission_new();
+  assert_non_null(m);
+  assert_int_equal(acp_mission_set(m, "distance", nm * ACP_NM), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "cruise_altitude", fl * ACP_FL), ACP_OK);
+  return m;
+}
+
+static void test_mission_keys(void **state) {
+  (void)state;
+  acp_mission *m = acp_mission_new();
+  double v = 0.0;
+  /* typical defaults (common practice; the approved fuel policy governs) */
+  assert_int_equal(acp_mission_get(m, "contingency_fraction", &v), ACP_OK);
+  CHECK_CLOSE(v, 0.05, 0.0, 0.0, "contingency 5 % of trip fuel");
+  assert_int_equal(acp_mission_get(m, "final_reserve_time", &v), ACP_OK);
+  CHECK_CLOSE(v, 1800.0, 0.0, 0.0, "final reserve 30 min");
+  assert_int_equal(acp_mission_get(m, "holding_height", &v), ACP_OK);
+  CHECK_CLOSE(v, 1500 * ACP_FT, 1e-9, 0.0, "holding 1,500 ft above the destination");
+  assert_int_equal(acp_mission_get(m, "taxi_time", &v), ACP_OK);
+  CHECK_CLOSE(v, 600.0, 0.0, 0.0, "taxi 10 min");
+  assert_int_equal(acp_mission_get(m, "cruise_mode", &v), ACP_OK);
+  CHECK_CLOSE(v, ACP_CRUISE_FIXED_MACH, 0.0, 0.0, "fixed Mach by default");
+  assert_int_equal(acp_mission_get(m, "taxi_fuel", &v), ACP_OK);
+  CHECK_NAN(v, "taxi fuel estimated unless set");
+  assert_int_equal(acp_mission_get(m, "distance", &v), ACP_OK);
+  CHECK_NAN(v, "distance has no default");
+  /* set and get back */
+  assert_int_equal(acp_mission_set(m, "wind", -25.0), ACP_OK);
+  assert_int_equal(acp_mission_get(m, "wind", &v), ACP_OK);
+  CHECK_CLOSE(v, -25.0, 0.0, 0.0, "wind");
+  assert_int_equal(acp_mission_set(m, "step_climb", 0.0), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "step_climb", 609.6), ACP_OK);
+  /* errors */
+  assert_int_equal(acp_mission_set(m, "no_such_key", 1.0), ACP_ERR_UNKNOWN_KEY);
+  assert_int_equal(acp_mission_get(m, "no_such_key", &v), ACP_ERR_UNKNOWN_KEY);
+  CHECK_NAN(v, "NaN on error");
+  assert_int_equal(acp_mission_set(m, "wind", NAN), ACP_ERR_INVALID);
+  assert_int_equal(acp_mission_set(m, "wind", INFINITY), ACP_ERR_INVALID);
+  assert_int_equal(acp_mission_set(m, "wind", 150.0), ACP_ERR_RANGE);
+  assert_int_equal(acp_mission_set(m, "distance", 10.0), ACP_ERR_RANGE);
+  assert_int_equal(acp_mission_set(m, "contingency_fraction", -0.01), ACP_ERR_RANGE);
+  assert_int_equal(acp_mission_set(m, "cruise_mode", 2.5), ACP_ERR_INVALID);
+  assert_int_equal(acp_mission_set(m, "cruise_mode", 6), ACP_ERR_RANGE);
+  assert_int_equal(acp_mission_set(m, "step_climb", 50.0), ACP_ERR_RANGE);
+  assert_int_equal(acp_mission_set(NULL, "wind", 1.0), ACP_ERR_INVALID);
+  assert_int_equal(acp_mission_set(m, NULL, 1.0), ACP_ERR_INVALID);
+  assert_int_equal(acp_mission_get(m, "wind", NULL), ACP_ERR_INVALID);
+  assert_int_equal(acp_mission_get(NULL, "wind", &v), ACP_ERR_INVALID);
+  assert_int_equal(acp_mission_get(m, "wind", &v), ACP_OK);
+  CHECK_CLOSE(v, -25.0, 0.0, 0.0, "unchanged by the failed sets");
+  acp_mission_free(m);
+  acp_mission_free(NULL);
+}
+
+/* The phases add up, the fuel policy is applied as documented, and the
+   trip is the composition of the public climb, cruise and descent. */
+static void test_bookkeeping(void **state) {
+  (void)state;
+  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_mission *m = sector(500, 350);
+  const double zfw = 32000.0;
+  acp_trip_result t;
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, zfw, &t), ACP_OK);
+  CHECK_CLOSE(t.infeasible, ACP_TRIP_FEASIBLE, 0.0, 0.0, "feasible");
+  CHECK_NAN(t.excess, "no excess");
+  CHECK_CLOSE(t.zero_fuel_mass, zfw, 0.1, 0.0, "zero-fuel mass matched to 0.1 kg");
+  assert_true(t.iterations >= 2.0 && t.iterations <= 30.0);
+  CHECK_CLOSE(t.climb_distance + t.cruise_distance + t.descent_distance, 500 * ACP_NM, 1.0, 0.0,
+              "phases cover the distance (top of descent to 1 m)");
+  CHECK_CLOSE(t.climb_fuel + t.cruise_fuel + t.descent_fuel, t.trip_fuel, 0.0, 1e-12, "trip fuel");
+  CHECK_CLOSE(t.climb_time + t.cruise_time + t.descent_time, t.trip_time, 0.0, 1e-12, "trip time");
+  CHECK_CLOSE(t.takeoff_mass - t.landing_mass, t.trip_fuel, 0.0, 1e-12, "TOW - LW = trip fuel");
+  CHECK_CLOSE(t.contingency_fuel, 0.05 * t.trip_fuel, 0.0, 1e-12, "contingency 5 %");
+  CHECK_CLOSE(t.alternate_fuel, 0.0, 0.0, 0.0, "no alternate given");
+  CHECK_CLOSE(t.block_fuel,
+              t.taxi_fuel + t.trip_fuel + t.contingency_fuel + t.alternate_fuel +
+                  t.final_reserve_fuel,
+              0.0, 1e-12, "block fuel");
+  CHECK_CLOSE(t.takeoff_fuel, t.block_fuel - t.taxi_fuel, 0.0, 1e-12, "fuel at take-off");
+  CHECK_CLOSE(t.takeoff_mass, t.zero_fuel_mass + t.takeoff_fuel, 1e-6, 0.0, "TOW = ZFW + fuel");
+  CHECK_CLOSE(t.ramp_mass, t.takeoff_mass + t.taxi_fuel, 0.0, 1e-12, "ramp mass");
+  CHECK_CLOSE(t.block_time, t.trip_time + 600.0, 0.0, 1e-12, "block time = trip + taxi");
+  /* taxi fuel: 10 min at the engines' flight-idle fuel flow (the file's 0.07
+     kg/s per engine, referred, at sea level and about 10 kt) */
+  CHECK_CLOSE(t.taxi_fuel, 600.0 * 2 * 0.07, 0.0, 1e-3, "taxi fuel from idle fuel flow");
+  /* final reserve: 30 min at the least fuel flow, between the fuel flows at
+     its end mass (ZFW) and its start mass (ZFW + reserve) */
+  acp_cruise_point lo, hi;
+  const double hh = 1500 * ACP_FT;
+  assert_int_equal(acp_cruise_speed(ac, ACP_CRUISE_MAX_ENDURANCE, 0, t.zero_fuel_mass, hh, 0, 0,
+                                    &lo),
+                   ACP_OK);
+  assert_int_equal(acp_cruise_speed(ac, ACP_CRUISE_MAX_ENDURANCE, 0,
+                                    t.zero_fuel_mass + t.final_reserve_fuel, hh, 0, 0, &hi),
+                   ACP_OK);
+  assert_true(t.final_reserve_fuel > 1800.0 * lo.fuel_flow);
+  assert_true(t.final_reserve_fuel < 1800.0 * hi.fuel_flow);
+  /* recomposition from the public functions */
+  acp_profile cl, de;
+  acp_cruise_result cr;
+  assert_int_equal(acp_climb(ac, t.takeoff_mass, 0, 350 * ACP_FL, 0, 0, 0, &cl), ACP_OK);
+  CHECK_CLOSE(cl.mass_end, t.top_of_climb_mass, 0.0, 1e-12, "top of climb");
+  assert_int_equal(acp_cruise(ac, ACP_CRUISE_FIXED_MACH, 0, cl.mass_end, 350 * ACP_FL, 0, 0,
+                              ACP_CRUISE_END_DISTANCE, t.cruise_distance, 0, 0, &cr),
+                   ACP_OK);
+  CHECK_CLOSE(cr.mass_end, t.top_of_descent_mass, 0.0, 1e-12, "top of descent");
+  assert_int_equal(acp_descent(ac, cr.mass_end, 350 * ACP_FL, 0, 0, 0, 0, &de), ACP_OK);
+  CHECK_CLOSE(de.mass_end, t.landing_mass, 0.0, 1e-12, "landing");
+  /* the same trip from the take-off mass found */
+  acp_trip_result u;
+  assert_int_equal(acp_trip(ac, m, t.takeoff_mass, &u), ACP_OK);
+  CHECK_CLOSE(u.zero_fuel_mass, zfw, 0.1, 0.0, "acp_trip at that mass gives the zero-fuel mass");
+  CHECK_CLOSE(u.iterations, 1.0, 0.0, 0.0, "one pass");
+  /* sanity bands for an invented ~40 t regional jet (common practice, from
+     memory: such jets burn roughly 3 to 4.5 kg per NM on a 500 NM sector;
+     band widened to 2.5 to 5 as a sanity check, not a validation) */
+  const double per_nm = t.trip_fuel / 500.0;
+  assert_true(per_nm > 2.5 && per_nm < 5.0);
+  /* trip time: more than the distance at the cruise TAS, less than that + 30 min */
+  const double v_cruise = 0.78 * acp_isa_sound_speed(350 * ACP_FL, 0);
+  assert_true(t.trip_time > 500 * ACP_NM / v_cruise);
+  assert_true(t.trip_time < 500 * ACP_NM / v_cruise + 1800.0);
+  acp_mission_free(m);
+  acp_aircraft_free(ac);
+}
+
+/* Fuel-policy keys: alternate, contingency minimum, no final reserve, taxi fuel given. */
+static void test_policy(void **state) {
+  (void)state;
+  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_mission *m = sector(400, 330);
+  acp_trip_result a, b;
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 31000, &a), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "alternate_fuel", 1200), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "contingency_minimum", 300), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "taxi_fuel", 150), ACP_OK);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 31000, &b), ACP_OK);
+  CHECK_CLOSE(b.alternate_fuel, 1200.0, 0.0, 0.0, "alternate fuel");
+  CHECK_CLOSE(b.contingency_fuel, 300.0, 0.0, 0.0, "contingency minimum applies (5 % < 300 kg)");
+  CHECK_CLOSE(b.taxi_fuel, 150.0, 0.0, 0.0, "taxi fuel given");
+  /* carrying 1,500 kg more costs trip fuel: the heavier aircraft burns more */
+  assert_true(b.trip_fuel > a.trip_fuel);
+  assert_true(b.takeoff_mass > a.takeoff_mass + 1200.0);
+  assert_int_equal(acp_mission_set(m, "final_reserve_time", 0), ACP_OK);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 31000, &b), ACP_OK);
+  CHECK_CLOSE(b.final_reserve_fuel, 0.0, 0.0, 0.0, "no final reserve");
+  acp_mission_free(m);
+  acp_aircraft_free(ac);
+}
+
+/* Speed modes and wind in a trip (common practice): maximum range burns the
+   least cruise fuel, long-range cruise about 1 % more per distance and is
+   faster; a headwind costs fuel and time, a tailwind saves them. */
+static void test_modes_and_wind(void **state) {
+  (void)state;
+  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_mission *m = sector(800, 350);
+  acp_trip_result mr, lrc, eco, head, still, tail;
+  assert_int_equal(acp_mission_set(m, "cruise_mode", ACP_CRUISE_MAX_RANGE), ACP_OK);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 30000, &mr), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "cruise_mode", ACP_CRUISE_LONG_RANGE), ACP_OK);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 30000, &lrc), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "cruise_mode", ACP_CRUISE_ECONOMY), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "cost_index", 40), ACP_OK);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 30000, &eco), ACP_OK);
+  assert_true(mr.trip_fuel < lrc.trip_fuel && lrc.trip_fuel < eco.trip_fuel);
+  assert_true(mr.trip_time > lrc.trip_time && lrc.trip_time > eco.trip_time);
+  /* SAR 0.99 of the maximum at every point: the mean SARs differ by about 1/0.99 */
+  CHECK_CLOSE(mr.cruise_sar_mean / lrc.cruise_sar_mean, 1.0 / 0.99, 0.0, 1e-3,
+              "long-range cruise: 1 % less SAR");
+  assert_int_equal(acp_mission_set(m, "cruise_mode", ACP_CRUISE_LONG_RANGE), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "wind", -25.7), ACP_OK); /* 50 kt headwind */
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 30000, &head), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "wind", 0), ACP_OK);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 30000, &still), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "wind", 25.7), ACP_OK);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 30000, &tail), ACP_OK);
+  assert_true(head.trip_fuel > still.trip_fuel && still.trip_fuel > tail.trip_fuel);
+  assert_true(head.trip_time > still.trip_time && still.trip_time > tail.trip_time);
+  /* sanity band: the air distance of the cruise grows as TAS/(TAS - wind),
+     about 13 % for 50 kt against 446 kt; the climb burns about the same, the
+     cruise covers more ground (climb and descent cover less) and the
+     long-range speed rises into the wind: expect 5 % to 20 % more trip fuel */
+  const double ratio = head.trip_fuel / still.trip_fuel;
+  assert_true(ratio > 1.05 && ratio < 1.20);
+  acp_mission_free(m);
+  acp_aircraft_free(ac);
+}
+
+/* A trip with step climbs climbs from FL310 and burns less than one without. */
+static void test_trip_step_climbs(void **state) {
+  (void)state;
+  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_mission *m = sector(1200, 310);
+  acp_trip_result flat, step;
+  assert_int_equal(acp_mission_set(m, "cruise_mode", ACP_CRUISE_LONG_RANGE), ACP_OK);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 31000, &flat), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "step_climb", 2000 * ACP_FT), ACP_OK);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 31000, &step), ACP_OK);
+  assert_true(step.cruise_altitude_end > 310 * ACP_FL);
+  assert_true(step.cruise_altitude_end <= 370 * ACP_FL + 1e-6);
+  CHECK_CLOSE(flat.cruise_altitude_end, 310 * ACP_FL, 1e-9, 0.0, "no step climb");
+  assert_true(step.trip_fuel < flat.trip_fuel);
+  CHECK_CLOSE(step.climb_distance + step.cruise_distance + step.descent_distance, 1200 * ACP_NM,
+              1.0, 0.0, "distance closes with step climbs");
+  acp_mission_free(m);
+  acp_aircraft_free(ac);
+}
+
+static void check_infeasible(int st, const acp_trip_result *t, int want_st, int why, double excess,
+                             double tol, const char *label) {
+  if (st != want_st) print_error("%s: status %d want %d\n", label, st, want_st);
+  assert_int_equal(st, want_st);
+  CHECK_CLOSE(t->infeasible, why, 0.0, 0.0, label);
+  if (tol < 0.0) assert_true(t->excess > 0.0); /* only its sign is known */
+  else if (isnan(excess)) CHECK_NAN(t->excess, label);
+  else CHECK_CLOSE(t->excess, excess, tol, 0.0, label);
+  CHECK_NAN(t->trip_fuel, label);
+  CHECK_NAN(t->takeoff_mass, label);
+  CHECK_NAN(t->block_fuel, label);
+}
+
+/* Every infeasible mission is a named error with its reason and excess. */
+static void test_infeasible(void **state) {
+  (void)state;
+  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_mission *m = sector(500, 350);
+  acp_trip_result t;
+  int st;
+  st = acp_trip(ac, m, 41000, &t);
+  check_infeasible(st, &t, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_TAKEOFF, 1000.0, 1e-9, "MTOW");
+  st = acp_trip_for_zero_fuel_mass(ac, m, 35000, &t);
+  check_infeasible(st, &t, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_ZERO_FUEL, 500.0, 1e-9, "MZFW");
+  /* a take-off mass whose reserves leave a zero-fuel mass above the limit */
+  st = acp_trip(ac, m, 38000, &t);
+  assert_int_equal(st, ACP_ERR_RANGE);
+  CHECK_CLOSE(t.infeasible, ACP_TRIP_OVER_MAX_ZERO_FUEL, 0.0, 0.0, "MZFW from a take-off mass");
+  assert_true(t.excess > 0.0);
+  /* long sector and heavy: above MTOW */
+  acp_mission *far = sector(1500, 350);
+  assert_int_equal(acp_mission_set(far, "alternate_fuel", 1000), ACP_OK);
+  st = acp_trip_for_zero_fuel_mass(ac, far, 34000, &t);
+  assert_int_equal(st, ACP_ERR_RANGE);
+  CHECK_CLOSE(t.infeasible, ACP_TRIP_OVER_MAX_TAKEOFF, 0.0, 0.0, "needed take-off mass above MTOW");
+  assert_true(t.excess > 0.0);
+  /* short sector with a big alternate: lands above MLW */
+  acp_mission *near = sector(300, 350);
+  assert_int_equal(acp_mission_set(near, "alternate_fuel", 2500), ACP_OK);
+  st = acp_trip_for_zero_fuel_mass(ac, near, 34000, &t);
+  assert_int_equal(st, ACP_ERR_RANGE);
+  CHECK_CLOSE(t.infeasible, ACP_TRIP_OVER_MAX_LANDING, 0.0, 0.0, "MLW");
+  assert_true(t.excess > 0.0 && t.excess < 500.0);
+  /* too little tank */
+  assert_int_equal(acp_aircraft_set(ac, "fuel_capacity", 2000), ACP_OK);
+  st = acp_trip_for_zero_fuel_mass(ac, m, 32000, &t);
+  assert_int_equal(st, ACP_ERR_RANGE);
+  CHECK_CLOSE(t.infeasible, ACP_TRIP_OVER_FUEL_CAPACITY, 0.0, 0.0, "fuel capacity");
+  assert_true(t.excess > 0.0);
+  assert_int_equal(acp_aircraft_set(ac, "fuel_capacity", 9000), ACP_OK);
+  /* shorter than climb + descent */
+  acp_mission *hop = sector(150, 350);
+  st = acp_trip_for_zero_fuel_mass(ac, hop, 32000, &t);
+  check_infeasible(st, &t, ACP_ERR_RANGE, ACP_TRIP_TOO_SHORT, NAN, -1, "too short (missing m)");
+  /* above max_altitude (37,000 ft) */
+  acp_mission *high = sector(800, 390);
+  st = acp_trip(ac, high, 36000, &t);
+  assert_int_equal(st, ACP_ERR_RANGE);
+  CHECK_CLOSE(t.infeasible, ACP_TRIP_ABOVE_MAX_ALTITUDE, 0.0, 0.0, "above max_altitude");
+  CHECK_CLOSE(t.excess, 2000 * ACP_FT, 1e-6, 0.0, "by 2,000 ft");
+  /* without the altitude limit the climb to 15,000 m cannot be made */
+  assert_int_equal(acp_aircraft_unset(ac, "max_altitude"), ACP_OK);
+  assert_int_equal(acp_mission_set(high, "cruise_altitude", 15000), ACP_OK);
+  st = acp_trip(ac, high, 38000, &t);
+  check_infeasible(st, &t, ACP_ERR_THRUST, ACP_TRIP_CANNOT_CLIMB, NAN, 0, "cannot climb");
+  /* a cruise Mach the engines cannot hold (MMO removed, wave drag) */
+  assert_int_equal(acp_aircraft_unset(ac, "mmo"), ACP_OK);
+  assert_int_equal(acp_aircraft_set(ac, "cruise_mach", 0.93), ACP_OK);
+  st = acp_trip(ac, m, 38000, &t);
+  check_infeasible(st, &t, ACP_ERR_THRUST, ACP_TRIP_CANNOT_CRUISE, NAN, 0, "cannot cruise");
+  assert_int_equal(acp_aircraft_set(ac, "cruise_mach", 0.78), ACP_OK);
+  /* cruise altitude not above the airports */
+  acp_mission *low = sector(300, 350);
+  assert_int_equal(acp_mission_set(low, "destination_altitude", 1000), ACP_OK);
+  assert_int_equal(acp_mission_set(low, "cruise_altitude", 800), ACP_OK);
+  st = acp_trip(ac, low, 36000, &t);
+  check_infeasible(st, &t, ACP_ERR_RANGE, ACP_TRIP_CRUISE_TOO_LOW, 200.0, 1e-9, "cruise too low");
+  /* reserves larger than the aircraft */
+  assert_int_equal(acp_mission_set(m, "alternate_fuel", 1.0e6), ACP_OK);
+  st = acp_trip(ac, m, 36000, &t);
+  assert_int_equal(st, ACP_ERR_RANGE);
+  CHECK_CLOSE(t.infeasible, ACP_TRIP_NO_FUEL, 0.0, 0.0, "no fuel");
+  acp_mission_free(m);
+  acp_mission_free(far);
+  acp_mission_free(near);
+  acp_mission_free(hop);
+  acp_mission_free(high);
+  acp_mission_free(low);
+  acp_aircraft_free(ac);
+}
+
+static void test_bad_arguments(void **state) {
+  (void)state;
+  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_mission *m = sector(500, 350);
+  acp_trip_result t;
+  assert_int_equal(acp_trip(NULL, m, 36000, &t), ACP_ERR_INVALID);
+  CHECK_NAN(t.trip_fuel, "NaN out");
+  CHECK_NAN(t.infeasible, "no reason for a bad argument");
+  assert_int_equal(acp_trip(ac, NULL, 36000, &t), ACP_ERR_INVALID);
+  assert_int_equal(acp_trip(ac, m, 36000, NULL), ACP_ERR_INVALID);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(NULL, m, 30000, &t), ACP_ERR_INVALID);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 30000, NULL), ACP_ERR_INVALID);
+  const double bad[] = {NAN, INFINITY, -INFINITY};
+  for (size_t i = 0; i < 3; ++i) {
+    assert_int_equal(acp_trip(ac, m, bad[i], &t), ACP_ERR_INVALID);
+    CHECK_NAN(t.block_fuel, "NaN out");
+    assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, bad[i], &t), ACP_ERR_INVALID);
+  }
+  assert_int_equal(acp_trip(ac, m, 0.5, &t), ACP_ERR_RANGE);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, -5, &t), ACP_ERR_RANGE);
+  /* a mission without its distance or cruise altitude */
+  acp_mission *empty = acp_mission_new();
+  assert_int_equal(acp_trip(ac, empty, 36000, &t), ACP_ERR_INVALID);
+  assert_int_equal(acp_mission_set(empty, "distance", 500 * ACP_NM), ACP_OK);
+  assert_int_equal(acp_trip(ac, empty, 36000, &t), ACP_ERR_INVALID);
+  acp_mission_free(empty);
+  /* an aircraft without engines, or without a climb schedule */
+  acp_aircraft *drag_only = acp_aircraft_new();
+  char err[128];
+  assert_int_equal(
+      acp_aircraft_parse(drag_only, "wing_area = 30\nspan = 15\ncd0 = 0.02\noswald = 0.8\n", err,
+                         sizeof err),
+      ACP_OK);
+  assert_int_equal(acp_trip(drag_only, m, 5000, &t), ACP_ERR_INVALID);
+  acp_aircraft_free(drag_only);
+  assert_int_equal(acp_aircraft_unset(ac, "climb_cas"), ACP_OK);
+  assert_int_equal(acp_trip(ac, m, 36000, &t), ACP_ERR_INVALID);
+  CHECK_NAN(t.trip_fuel, "NaN out");
+  acp_mission_free(m);
+  acp_aircraft_free(ac);
+}
+
+int main(void) {
+  const struct CMUnitTest tests[] = {
+      cmocka_unit_test(test_mission_keys),   cmocka_unit_test(test_bookkeeping),
+      cmocka_unit_test(test_policy),         cmocka_unit_test(test_modes_and_wind),
+      cmocka_unit_test(test_trip_step_climbs), cmocka_unit_test(test_infeasible),
+      cmocka_unit_test(test_bad_arguments),
+  };
+  return cmocka_run_group_tests(tests, NULL, NULL);
+}
