@@ -51,3 +51,6 @@
 %include "acperf/propulsion.h"
 ACPY_TRACE(acp_profile_point)
 %include "acperf/climb.h"
+ACPY_TRACE(acp_cruise_point)
+%include "acperf/cruise.h"
+%include "acperf/mission.h"

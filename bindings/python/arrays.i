@@ -159,13 +159,13 @@ static double *acpy_output(size_t len, PyObject **owner) {
 %typemap(freearg) (size_t capacity, TYPE *points, size_t *count) { Py_XDECREF(owner$argnum); }
 %enddef
 
-/* ---- enum-valued int parameters (rating, mode): any whole real number ----
+/* ---- enum-valued int parameters (rating, mode, end): any whole real number ----
    The Python layer passes floats (broadcast arrays are float64); a value that
    is not a whole number becomes -1, which the C function refuses as invalid. */
-%typemap(in) int rating, int mode {
+%typemap(in) int rating, int mode, int end {
   const double v = PyFloat_AsDouble($input);
   if (v == -1.0 && PyErr_Occurred()) SWIG_fail; /* not a real number: TypeError */
   /* NaN, Inf or a fraction is no enum value: -1, which the C function refuses */
   $1 = (isfinite(v) && v == floor(v) && fabs(v) < 1.0e9) ? (int)v : -1;
 }
-%typemap(typecheck, precedence=SWIG_TYPECHECK_INTEGER) int rating, int mode "$1 = 1;"
+%typemap(typecheck, precedence=SWIG_TYPECHECK_INTEGER) int rating, int mode, int end "$1 = 1;"

@@ -77,6 +77,13 @@ POOLS = {
     "c0": [-1.0, 1.19e-5],
     "c1": [0.0, 1.05e-5],
     "density_ratio": [0.1, 1.0, 0.5],
+    # cruise.h, Breguet: 230 m/s, TSFC 0.6 lb/(lbf h) = 1.7e-5 kg/(N s), L/D 16 (invented)
+    "tsfc": [-1.0, 1.7e-5, 2.0e-5],
+    "lift_to_drag": [0.0, 16.0, 12.0],
+    "mass_start": [-1.0, 36000.0, 5000.0],
+    "mass_end": [40000.0, 33000.0, 4500.0],
+    "propeller_efficiency": [1.5, 0.82],
+    "psfc": [0.0, 1.0e-7],
     "sweep_max_thickness": [0.0, 0.3, 0.5, 2.0],
     "fineness_ratio": [2.0, 7.5, 12.0, 0.0],
 }
@@ -127,7 +134,8 @@ def test_parameter_names_are_the_c_names(name):
     fn = getattr(acperf, name)
     ret, cparams = parse_headers()[fn.c_function]
     # trace functions take (capacity, points, count) from the Python layer itself
-    inputs = [p for t, p in cparams if t in ("double", "const char*", "const acp_aircraft*", "int")
+    inputs = [p for t, p in cparams if t in ("double", "const char*", "const acp_aircraft*", "int",
+                                             "const acp_mission*")
               or (t == "size_t" and p not in ("n", "capacity")) or (t == "const double*")]
     assert list(inspect.signature(fn).parameters) == inputs
     assert fn.c_function.startswith("acp_" + name)
@@ -213,6 +221,8 @@ def test_every_wrapped_function_is_reachable():
                      "acp_version_string"}
     # the model functions behind acperf.Aircraft (checked in test_binding_aircraft.py)
     python_forms |= {n for n in protos if n.startswith("acp_aircraft_")}
+    # and behind acperf.Mission
+    python_forms |= {n for n in protos if n.startswith("acp_mission_")}
     for cname in protos:
         assert hasattr(acperf.capi, cname), f"{cname} missing from acperf.capi"
     assert set(protos) - python_forms == set(), "C functions without a Python form"

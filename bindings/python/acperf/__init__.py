@@ -32,8 +32,9 @@ from .aircraft import Aircraft
 from ._polar import *  # noqa: F401,F403
 from ._speeds import *  # noqa: F401,F403
 from .performance import *  # noqa: F401,F403
+from ._cruise import *  # noqa: F401,F403
 from . import atmosphere as _atmosphere, airspeed as _airspeed, friction as _friction
-from . import _polar, _speeds, performance as _performance
+from . import _polar, _speeds, performance as _performance, _cruise
 
 strerror = capi.acp_strerror
 version = capi.acp_version
@@ -42,4 +43,4 @@ __version__ = capi.acp_version_string()
 
 __all__ = ["AcperfError", "AcperfWarning", "Result", "capi", "units", "strerror", "version",
            "version_string", "Aircraft", *_atmosphere.__all__, *_airspeed.__all__,
-           *_friction.__all__, *_polar.__all__, *_speeds.__all__, *_performance.__all__]
+           *_friction.__all__, *_polar.__all__, *_speeds.__all__, *_performance.__all__, *_cruise.__all__]

@@ -1,0 +1,171 @@
+"""Cruise, specific air range, Breguet, and trips (acperf/cruise.h, acperf/mission.h).
+
+SI units as in C: masses kg, altitudes m, speeds m/s, distances m, times s,
+specific air range m/kg, TSFC kg/(N s). Cruise speed modes are the
+``CRUISE_*`` constants; a trip takes an :class:`acperf.Mission` (route, cruise
+and fuel policy with typical defaults that defer to the operator's approved fuel
+policy and local rules). Results are engineering estimates, not approved
+flight-manual data.
+"""
+
+import numpy as np
+
+from . import capi as _c
+from ._core import bind, model_handle, result_type
+
+__all__ = ["CruisePoint", "CruiseResult", "TripResult", "Mission",
+           "CRUISE_FIXED_MACH", "CRUISE_MAX_RANGE", "CRUISE_LONG_RANGE", "CRUISE_ECONOMY",
+           "CRUISE_MAX_ENDURANCE", "END_DISTANCE", "END_FUEL", "END_TIME",
+           "CruiseSpeeds", "specific_air_range", "cruise_speed", "cruise_speed_n", "cruise",
+           "cruise_trace", "breguet_range",
+           "breguet_endurance", "breguet_range_propeller", "trip", "trip_for_zero_fuel_mass"]
+
+CRUISE_FIXED_MACH = _c.ACP_CRUISE_FIXED_MACH
+CRUISE_MAX_RANGE = _c.ACP_CRUISE_MAX_RANGE
+CRUISE_LONG_RANGE = _c.ACP_CRUISE_LONG_RANGE
+CRUISE_ECONOMY = _c.ACP_CRUISE_ECONOMY
+CRUISE_MAX_ENDURANCE = _c.ACP_CRUISE_MAX_ENDURANCE
+END_DISTANCE, END_FUEL, END_TIME = _c.ACP_CRUISE_END_DISTANCE, _c.ACP_CRUISE_END_FUEL, \
+    _c.ACP_CRUISE_END_TIME
+
+
+CruisePoint = result_type(
+    "CruisePoint",
+    ("time", "distance", "hp", "mass", "tas", "cas", "mach", "ground_speed", "drag",
+     "fuel_flow", "tsfc", "lift_to_drag", "sar", "limit"),
+    "Level flight at a cruise point (the fields of acp_cruise_point); in a trace each "
+    "field is an array over the points.")
+CruiseResult = result_type(
+    "CruiseResult",
+    ("time", "distance", "fuel", "mass_end", "hp_end", "sar_mean", "tas_start", "tas_end",
+     "mach_start", "mach_end", "step_climbs", "step_climb_time", "step_climb_distance",
+     "step_climb_fuel"),
+    "Totals of a cruise (the fields of acp_cruise_result).")
+CruiseSpeeds = result_type(
+    "CruiseSpeeds", ("tas", "mach", "sar"),
+    "Speed of a cruise mode over arrays of conditions (outputs of acp_cruise_speed_n).")
+TripResult = result_type(
+    "TripResult",
+    ("infeasible", "excess", "takeoff_mass", "landing_mass", "zero_fuel_mass", "ramp_mass",
+     "trip_fuel", "taxi_fuel", "contingency_fuel", "alternate_fuel", "final_reserve_fuel",
+     "block_fuel", "takeoff_fuel", "trip_time", "block_time", "climb_time", "climb_distance",
+     "climb_fuel", "cruise_time", "cruise_distance", "cruise_fuel", "descent_time",
+     "descent_distance", "descent_fuel", "top_of_climb_mass", "top_of_descent_mass",
+     "cruise_altitude_end", "cruise_sar_mean", "iterations"),
+    "A trip and its fuel (the fields of acp_trip_result).")
+
+
+class Mission:
+    """A mission (route, cruise, fuel policy): an owned acp_mission handle with
+    dict-like access by the keys of docs/methods/trip.md; typical defaults for
+    what is not set."""
+
+    __slots__ = ("_handle", "__weakref__")
+
+    def __init__(self, **values):
+        self._handle = _c.acp_mission_new()
+        if self._handle is None:
+            raise MemoryError("acp_mission_new")
+        for key, value in values.items():
+            self[key] = value
+
+    @classmethod
+    def from_dict(cls, values):
+        """A mission from {key: value} (for example a two-column table)."""
+        return cls(**dict(values))
+
+    def __setitem__(self, key, value):
+        _c.acp_mission_set(self._handle, key, float(value))
+
+    def __getitem__(self, key):
+        return _c.acp_mission_get(self._handle, key)
+
+    def __del__(self):
+        handle = getattr(self, "_handle", None)
+        if handle is not None:
+            _c.acp_mission_free(handle)
+            self._handle = None
+
+
+_AC = ("ac",)
+_SPEED = ("ac", "mode", "cost_index")
+
+specific_air_range = bind("specific_air_range", _c.acp_specific_air_range,
+                          _c.acp_specific_air_range_n,
+                          ("ac", "mass", "hp", "dtemp", "tas", "wind"), {"wind": 0.0},
+                          models=_AC)
+cruise_speed = bind("cruise_speed", _c.acp_cruise_speed, None,
+                    ("ac", "mode", "cost_index", "mass", "hp", "dtemp", "wind"), {"wind": 0.0},
+                    result=CruisePoint, models=_SPEED)
+cruise = bind("cruise", _c.acp_cruise, None,
+              ("ac", "mode", "cost_index", "mass", "hp", "dtemp", "wind", "end", "end_value",
+               "step", "step_climb"), {"step": 0.0, "step_climb": 0.0},
+              result=CruiseResult, models=_SPEED)
+breguet_range = bind("breguet_range", _c.acp_breguet_range, None,
+                     ("tas", "tsfc", "lift_to_drag", "mass_start", "mass_end"))
+breguet_endurance = bind("breguet_endurance", _c.acp_breguet_endurance, None,
+                         ("tsfc", "lift_to_drag", "mass_start", "mass_end"))
+breguet_range_propeller = bind("breguet_range_propeller", _c.acp_breguet_range_propeller, None,
+                               ("propeller_efficiency", "psfc", "lift_to_drag", "mass_start",
+                                "mass_end"))
+trip = bind("trip", _c.acp_trip, None, ("ac", "mission", "takeoff_mass"), result=TripResult,
+            models=("ac", "mission"))
+trip_for_zero_fuel_mass = bind("trip_for_zero_fuel_mass", _c.acp_trip_for_zero_fuel_mass, None,
+                               ("ac", "mission", "zero_fuel_mass"), result=TripResult,
+                               models=("ac", "mission"))
+
+
+def cruise_trace(ac, mode, cost_index, mass, hp, dtemp, wind, end, end_value, step=0.0,
+                 step_climb=0.0):
+    """cruise_trace(ac, mode, cost_index, mass, hp, dtemp, wind, end, end_value, step=0.0,
+    step_climb=0.0)
+
+    A cruise with its per-step trace: returns (trace, totals), the trace a CruisePoint
+    of arrays (one element per point), the totals a CruiseResult. Raises AcperfError
+    as acp_cruise_trace does. Estimates, not approved data.
+    """
+    capacity = 256
+    while True:
+        try:
+            points, totals = _c.acp_cruise_trace(
+                model_handle(ac), mode, float(cost_index), float(mass), float(hp), float(dtemp),
+                float(wind), end, float(end_value), float(step), float(step_climb), capacity)
+            break
+        except _c.AcperfError as exc:
+            # too small a capacity is ACP_ERR_RANGE with nothing integrated: grow and retry
+            if exc.status != _c.ACP_ERR_RANGE or capacity >= 1 << 20:
+                raise
+            capacity *= 4
+    points = np.asarray(points)
+    trace = CruisePoint(*(points[:, i].copy() for i in range(points.shape[1])))
+    return trace, CruiseResult(*(getattr(totals, f) for f in CruiseResult._fields))
+
+
+cruise_trace.c_function = "acp_cruise_trace"
+cruise_trace.c_array_function = None
+
+
+def cruise_speed_n(ac, mode, cost_index, mass, hp, dtemp=0.0, wind=0.0):
+    """cruise_speed_n(ac, mode, cost_index, mass, hp, dtemp=0.0, wind=0.0)
+
+    TAS, Mach and SAR of a cruise mode over arrays of conditions, broadcast against
+    each other, in one call of acp_cruise_speed_n (NaN and an AcperfWarning where a
+    point is invalid). For one point with every field, use cruise_speed().
+    """
+    import warnings
+
+    from ._core import AcperfWarning
+
+    arrays = np.broadcast_arrays(*(np.asarray(v, dtype=np.float64)
+                                   for v in (mass, hp, dtemp, wind)))
+    shape = arrays[0].shape
+    flat = [np.ascontiguousarray(a).reshape(-1) for a in arrays]
+    bad, tas, mach, sar = _c.acp_cruise_speed_n(model_handle(ac), mode, float(cost_index), *flat)
+    if bad:
+        warnings.warn(f"cruise_speed_n: {bad} of {flat[0].size} points invalid; their results "
+                      "are NaN", AcperfWarning, stacklevel=2)
+    return CruiseSpeeds(tas.reshape(shape), mach.reshape(shape), sar.reshape(shape))
+
+
+cruise_speed_n.c_function = "acp_cruise_speed_n"
+cruise_speed_n.c_array_function = None
