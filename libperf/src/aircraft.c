@@ -421,11 +421,13 @@ int acp_aircraft_component(const acp_aircraft *ac, size_t index, char *name, siz
 /* ---- completeness -------------------------------------------------------- */
 
 static int check_component(const ac_component *c, char *err, size_t errlen) {
-  char where[64];
-  if (c->line)
-    snprintf(where, sizeof where, "component '%s' (line %u)", c->name, c->line);
-  else
-    snprintf(where, sizeof where, "component '%s'", c->name);
+  char where[64] = "";
+  if (err && errlen) { /* only for a message: formatting costs more than the checks */
+    if (c->line)
+      snprintf(where, sizeof where, "component '%s' (line %u)", c->name, c->line);
+    else
+      snprintf(where, sizeof where, "component '%s'", c->name);
+  }
   if (isnan(c->v[CK_TYPE])) {
     msg(err, errlen, "%s: missing key 'type'", where);
     return ACP_ERR_INVALID;
