@@ -294,6 +294,107 @@ static void print_climb_descent(const acp_aircraft *ac, double hp_origin) {
   printf("\n");
 }
 
+/* Specific air range over masses and flight levels at the fixed cruise Mach and
+   in long-range cruise, and the speeds of every cruise mode at one condition. */
+static void print_cruise(const acp_aircraft *ac) {
+  const double masses[] = {30000.0, 34000.0, 38000.0};
+  const double levels[] = {290.0, 330.0, 350.0, 370.0};
+  FILE *csv = open_output("sar.csv");
+  if (csv) fprintf(csv, "mass_kg,flight_level,isa_dev_K,mode,mach,ktas,sar_nm_per_1000kg,fuel_flow_kg_h\n");
+  printf("== Cruise: specific air range, NM per 1,000 kg (no wind) ==\n");
+  printf("%8s %5s %14s %14s\n", "mass kg", "FL", "M0.78", "long-range");
+  for (size_t i = 0; i < 3; ++i)
+    for (size_t j = 0; j < 4; ++j) {
+      const double hp = acp_fl_to_m(levels[j]), dt = day_dtemp(levels[j]);
+      acp_cruise_point fixed, lrc;
+      const int a = acp_cruise_speed(ac, ACP_CRUISE_FIXED_MACH, 0.0, masses[i], hp, dt, 0.0, &fixed);
+      const int b = acp_cruise_speed(ac, ACP_CRUISE_LONG_RANGE, 0.0, masses[i], hp, dt, 0.0, &lrc);
+      char t1[32] = "(no level flight)", t2[32] = "(no level flight)";
+      if (a == ACP_OK) snprintf(t1, sizeof t1, "%.1f", acp_m_to_nm(fixed.sar) * 1000.0);
+      if (b == ACP_OK)
+        snprintf(t2, sizeof t2, "%.1f (M%.3f)", acp_m_to_nm(lrc.sar) * 1000.0, lrc.mach);
+      printf("%8.0f %5.0f %14s %14s\n", masses[i], levels[j], t1, t2);
+      const acp_cruise_point *pts[] = {&fixed, &lrc};
+      const int st[] = {a, b};
+      const char *modes[] = {"fixed_mach", "long_range"};
+      for (int k = 0; k < 2 && csv; ++k)
+        if (st[k] == ACP_OK)
+          fprintf(csv, "%.0f,%.0f,%.1f,%s,%.5f,%.3f,%.4f,%.2f\n", masses[i], levels[j], dt,
+                  modes[k], pts[k]->mach, acp_mps_to_kt(pts[k]->tas),
+                  acp_m_to_nm(pts[k]->sar) * 1000.0, pts[k]->fuel_flow * 3600.0);
+    }
+  close_output(csv, "sar.csv");
+  const double hp = acp_fl_to_m(CRUISE_FL), dt = day_dtemp(CRUISE_FL), mass = 36000.0;
+  const struct { int mode; double ci; const char *name; } modes[] = {
+      {ACP_CRUISE_MAX_ENDURANCE, 0.0, "maximum endurance (holding)"},
+      {ACP_CRUISE_MAX_RANGE, 0.0, "maximum range"},
+      {ACP_CRUISE_LONG_RANGE, 0.0, "long-range cruise (99 % of max SAR)"},
+      {ACP_CRUISE_ECONOMY, 30.0, "economy, cost index 30 kg/min"},
+      {ACP_CRUISE_FIXED_MACH, 0.0, "fixed Mach (cruise_mach)"}};
+  printf("speed modes at %.0f kg, FL%.0f:\n", mass, CRUISE_FL);
+  for (size_t i = 0; i < sizeof modes / sizeof modes[0]; ++i) {
+    acp_cruise_point p;
+    if (acp_cruise_speed(ac, modes[i].mode, modes[i].ci, mass, hp, dt, 0.0, &p) != ACP_OK) continue;
+    printf("  %-38s M%.3f %4.0f KTAS %6.0f kg/h %6.1f NM/1000 kg\n", modes[i].name, p.mach,
+           acp_mps_to_kt(p.tas), p.fuel_flow * 3600.0, acp_m_to_nm(p.sar) * 1000.0);
+  }
+  printf("\n");
+}
+
+/* A 500 NM trip with typical fuel-policy defaults and a headwind. */
+static void print_trip(const acp_aircraft *ac, double hp_origin) {
+  acp_mission *m = acp_mission_new();
+  if (!m) return;
+  const double zfm = 32000.0;
+  acp_mission_set(m, "distance", acp_nm_to_m(500.0));
+  acp_mission_set(m, "cruise_altitude", acp_fl_to_m(CRUISE_FL));
+  acp_mission_set(m, "origin_altitude", hp_origin);
+  acp_mission_set(m, "destination_altitude", 0.0);
+  acp_mission_set(m, "isa_deviation", -9.0);
+  acp_mission_set(m, "wind", acp_kt_to_mps(-30.0));
+  acp_mission_set(m, "cruise_mode", ACP_CRUISE_LONG_RANGE);
+  printf("== Trip: 500 NM, FL350 long-range cruise, 30 kt headwind, ISA-9, zero-fuel mass "
+         "%.0f kg ==\n", zfm);
+  printf("(fuel policy: typical defaults, 10 min taxi, 5 %% contingency, 30 min final reserve "
+         "at 1,500 ft; the operator's approved fuel policy and local rules take precedence)\n");
+  acp_trip_result t;
+  const int st = acp_trip_for_zero_fuel_mass(ac, m, zfm, &t);
+  if (st != ACP_OK) {
+    printf("not feasible: %s (reason %.0f)\n\n", acp_strerror(st), t.infeasible);
+    acp_mission_free(m);
+    return;
+  }
+  printf("  climb   %5.1f min %6.1f NM %6.0f kg\n", t.climb_time / 60.0,
+         acp_m_to_nm(t.climb_distance), t.climb_fuel);
+  printf("  cruise  %5.1f min %6.1f NM %6.0f kg\n", t.cruise_time / 60.0,
+         acp_m_to_nm(t.cruise_distance), t.cruise_fuel);
+  printf("  descent %5.1f min %6.1f NM %6.0f kg\n", t.descent_time / 60.0,
+         acp_m_to_nm(t.descent_distance), t.descent_fuel);
+  printf("  trip fuel %.0f kg, trip time %.1f min; taxi %.0f, contingency %.0f, alternate %.0f, "
+         "final reserve %.0f kg\n", t.trip_fuel, t.trip_time / 60.0, t.taxi_fuel,
+         t.contingency_fuel, t.alternate_fuel, t.final_reserve_fuel);
+  printf("  block fuel %.0f kg, block time %.1f min; take-off mass %.0f kg, landing mass %.0f kg\n\n",
+         t.block_fuel, t.block_time / 60.0, t.takeoff_mass, t.landing_mass);
+  FILE *csv = open_output("trip.csv");
+  if (csv) {
+    fprintf(csv, "item,value,unit\n");
+    const struct { const char *name; double v; const char *unit; } rows[] = {
+        {"trip_fuel", t.trip_fuel, "kg"}, {"block_fuel", t.block_fuel, "kg"},
+        {"taxi_fuel", t.taxi_fuel, "kg"}, {"contingency_fuel", t.contingency_fuel, "kg"},
+        {"alternate_fuel", t.alternate_fuel, "kg"}, {"final_reserve_fuel", t.final_reserve_fuel, "kg"},
+        {"trip_time", t.trip_time / 60.0, "min"}, {"block_time", t.block_time / 60.0, "min"},
+        {"takeoff_mass", t.takeoff_mass, "kg"}, {"landing_mass", t.landing_mass, "kg"},
+        {"climb_distance", acp_m_to_nm(t.climb_distance), "NM"},
+        {"cruise_distance", acp_m_to_nm(t.cruise_distance), "NM"},
+        {"descent_distance", acp_m_to_nm(t.descent_distance), "NM"}};
+    for (size_t i = 0; i < sizeof rows / sizeof rows[0]; ++i)
+      fprintf(csv, "%s,%.3f,%s\n", rows[i].name, rows[i].v, rows[i].unit);
+  }
+  close_output(csv, "trip.csv");
+  printf("\n");
+  acp_mission_free(m);
+}
+
 int main(int argc, char **argv) {
   const char *aircraft_path = argc > 1 ? argv[1] : ACP_EXAMPLES_DIR "/aircraft/regional_jet.toml";
   snprintf(out_dir, sizeof out_dir, "%s", argc > 2 ? argv[2] : "acperf-report");
@@ -321,6 +422,8 @@ int main(int argc, char **argv) {
   print_speeds(ac);
   write_drag_curve(ac);
   print_climb_descent(ac, hp_origin);
+  print_cruise(ac);
+  print_trip(ac, hp_origin);
   print_winds();
   acp_aircraft_free(ac);
   printf("%s", CAUTION);
