@@ -169,3 +169,34 @@ static double *acpy_output(size_t len, PyObject **owner) {
   $1 = (isfinite(v) && v == floor(v) && fabs(v) < 1.0e9) ? (int)v : -1;
 }
 %typemap(typecheck, precedence=SWIG_TYPECHECK_INTEGER) int rating, int mode, int end "$1 = 1;"
+
+/* ---- tables: (size_t n_X, const double *X) inputs of their own lengths, and
+   `table_*` outputs of n_mass x n_hp x n_dtemp elements (acp_climb_table) ---- */
+%define ACPY_SIZED_INPUT(N, NAME)
+%typemap(in) (size_t N, const double *NAME) (PyObject *owner = NULL, size_t len = (size_t)-1) {
+  $2 = acpy_input($input, "$symname: NAME", &len, &owner);
+  if (!$2) SWIG_fail;
+  $1 = len;
+}
+%typemap(freearg) (size_t N, const double *NAME) { Py_XDECREF(owner$argnum); }
+%enddef
+ACPY_SIZED_INPUT(n_mass, mass)
+ACPY_SIZED_INPUT(n_hp, hp_end)
+ACPY_SIZED_INPUT(n_dtemp, dtemp)
+
+%define ACPY_TABLE_OUTPUT(NAME)
+%typemap(in, numinputs=0) double *NAME (PyObject *owner = NULL) { $1 = NULL; }
+%typemap(check) double *NAME {
+  /* the three sized inputs come first: arg5 n_mass, arg7 n_hp, arg9 n_dtemp */
+  $1 = acpy_output(arg5 * arg7 * arg9, &owner$argnum);
+  if (!$1) SWIG_fail;
+}
+%typemap(argout) double *NAME {
+  $result = SWIG_Python_AppendOutput($result, owner$argnum);
+  owner$argnum = NULL;
+}
+%typemap(freearg) double *NAME { Py_XDECREF(owner$argnum); }
+%enddef
+ACPY_TABLE_OUTPUT(table_time)
+ACPY_TABLE_OUTPUT(table_distance)
+ACPY_TABLE_OUTPUT(table_fuel)

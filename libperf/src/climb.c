@@ -212,12 +212,16 @@ typedef struct {
   size_t steps[PLAN_MAX];
   size_t nseg;
   size_t change_after;   /* segment after which the speed changes; PLAN_MAX if none */
+  int change_first;      /* a climb starting at the limit altitude: change speed first */
   double limit;
 } plan;
 
 static plan make_plan(const phase *ph, double h0, double h1, double step) {
   plan p = {.nseg = 0, .change_after = PLAN_MAX};
   p.limit = ac_value(ph->ac, AK_SPEED_LIMIT_ALTITUDE);
+  /* at the limit altitude itself the low-side speed is flown (as at the end of
+     a climb to it), so a climb from there accelerates first */
+  p.change_first = !ph->descent && fabs(h0 - p.limit) <= 1e-6 && h1 > p.limit;
   double cuts[3] = {p.limit, ACP_NAN, ATM_TROPOPAUSE};
   const double cas = ac_value(ph->ac, ph->descent ? AK_DESCENT_CAS : AK_CLIMB_CAS);
   const double mach = ac_value(ph->ac, ph->descent ? AK_DESCENT_MACH : AK_CLIMB_MACH);
@@ -245,7 +249,7 @@ static plan make_plan(const phase *ph, double h0, double h1, double step) {
 }
 
 static size_t plan_points(const plan *p) {
-  size_t n = 1 + (p->change_after < PLAN_MAX ? SPEED_CHANGE_STEPS : 0);
+  size_t n = 1 + (p->change_after < PLAN_MAX || p->change_first ? SPEED_CHANGE_STEPS : 0);
   for (size_t k = 0; k < p->nseg; ++k) n += p->steps[k];
   return n;
 }
@@ -285,11 +289,17 @@ static int profile(const acp_aircraft *ac, int descent, double mass, double h0, 
   }
   run r = {.trace = points, .capacity = capacity};
   const double side = descent ? -SIDE : SIDE;
-  st = scheduled_side(&ph, mass, h0, side, &r.cur);
+  st = scheduled_side(&ph, mass, h0, pl.change_first ? -SIDE : side, &r.cur);
   if (st == ACP_OK) st = usable(&ph, &r.cur);
   if (st != ACP_OK) return st;
   r.cur.time = r.cur.distance = 0.0;
   record(&r);
+  if (pl.change_first) {
+    acp_profile_point next;
+    st = scheduled_side(&ph, r.cur.mass, pl.limit, side, &next);
+    if (st == ACP_OK) st = speed_segment(&ph, &r, next.tas, next.mode);
+    if (st != ACP_OK) return st;
+  }
   for (size_t k = 0; k < pl.nseg && st == ACP_OK; ++k) {
     st = altitude_segment(&ph, &r, pl.end[k], pl.steps[k]);
     if (st != ACP_OK || k != pl.change_after) continue;
@@ -457,4 +467,46 @@ int acp_ceilings(const acp_aircraft *ac, double mass, double dtemp, acp_ceiling_
   out->max_cruise_altitude = top;
   out->optimum_altitude = optimum_altitude(ac, mass, dtemp, isnan(service) ? SEARCH_TOP : service);
   return ACP_OK;
+}
+
+/* ---- tables ------------------------------------------------------------ */
+
+static void table_put(double *a, size_t i, double v) {
+  if (a) a[i] = v;
+}
+
+size_t acp_climb_table(const acp_aircraft *ac, double hp_start, double wind, double step,
+                       size_t n_mass, const double *mass, size_t n_hp, const double *hp_end,
+                       size_t n_dtemp, const double *dtemp, double *table_time,
+                       double *table_distance, double *table_fuel) {
+  const size_t cells = n_mass * n_hp * n_dtemp;
+  for (size_t i = 0; i < cells; ++i) {
+    table_put(table_time, i, ACP_NAN);
+    table_put(table_distance, i, ACP_NAN);
+    table_put(table_fuel, i, ACP_NAN);
+  }
+  if (!ac || !mass || !hp_end || !dtemp || (n_mass && cells / n_mass != n_hp * n_dtemp))
+    return cells;
+  for (size_t j = 0; j < n_hp; ++j)
+    if (!(hp_end[j] > hp_start) || (j > 0 && !(hp_end[j] > hp_end[j - 1]))) return cells;
+  size_t filled = 0;
+  for (size_t i = 0; i < n_mass; ++i)
+    for (size_t k = 0; k < n_dtemp; ++k) {
+      /* chain the climb through the altitudes: each leg starts where the last ended */
+      double m = mass[i], t = 0.0, x = 0.0, from = hp_start;
+      for (size_t j = 0; j < n_hp; ++j) {
+        acp_profile leg;
+        if (acp_climb(ac, m, from, hp_end[j], dtemp[k], wind, step, &leg) != ACP_OK) break;
+        t += leg.time;
+        x += leg.distance;
+        m = leg.mass_end;
+        from = hp_end[j];
+        const size_t c = (i * n_hp + j) * n_dtemp + k;
+        table_put(table_time, c, t);
+        table_put(table_distance, c, x);
+        table_put(table_fuel, c, mass[i] - m);
+        ++filled;
+      }
+    }
+  return cells - filled;
 }

@@ -218,8 +218,49 @@ static void test_turboprop(void **state) {
   acp_aircraft_free(ac);
 }
 
+/* A climb table agrees with single climbs to each altitude; an altitude equal
+   to the speed limit (10,000 ft) keeps the level acceleration; unreachable
+   altitudes and bad arguments are NaN and counted. */
+static void test_table(void **state) {
+  const acp_aircraft *ac = *state;
+  const double mass[] = {34000.0, 40000.0};
+  const double hp[] = {10000 * FT, 25000 * FT, 35000 * FT, 45000 * FT};
+  const double dt[] = {-10.0, 0.0, 15.0};
+  double t[24], x[24], f[24];
+  const size_t bad = acp_climb_table(ac, 1500 * FT, 0.0, 0.0, 2, mass, 4, hp, 3, dt, t, x, f);
+  assert_int_equal(bad, 6); /* 45,000 ft: out of reach for every mass and day */
+  for (size_t i = 0; i < 2; ++i)
+    for (size_t j = 0; j < 4; ++j)
+      for (size_t k = 0; k < 3; ++k) {
+        const size_t c = (i * 4 + j) * 3 + k;
+        acp_profile p;
+        const int st = acp_climb(ac, mass[i], 1500 * FT, hp[j], dt[k], 0.0, 0.0, &p);
+        if (st != ACP_OK) {
+          CHECK_NAN(t[c], "unreachable cell");
+          continue;
+        }
+        CHECK_CLOSE(t[c], p.time, 0.0, 1e-4, "table time");
+        CHECK_CLOSE(x[c], p.distance, 0.0, 1e-4, "table distance");
+        CHECK_CLOSE(f[c], p.fuel, 0.0, 1e-4, "table fuel");
+      }
+  /* a climb from the limit altitude accelerates first, as a climb through it does */
+  acp_profile from_limit, below;
+  assert_int_equal(acp_climb(ac, 38000.0, 10000 * FT, 20000 * FT, 0.0, 0.0, 0.0, &from_limit),
+                   ACP_OK);
+  assert_int_equal(acp_climb(ac, 38000.0, 9000 * FT, 20000 * FT, 0.0, 0.0, 0.0, &below), ACP_OK);
+  assert_true(from_limit.speed_change_time > 0.0);
+  CHECK_CLOSE(from_limit.speed_change_fuel, below.speed_change_fuel, 0.0, 0.05, "same speed change");
+  /* altitudes not ascending, NULL arrays: every cell NaN */
+  const double unsorted[] = {20000 * FT, 10000 * FT};
+  assert_int_equal(acp_climb_table(ac, 0.0, 0.0, 0.0, 1, mass, 2, unsorted, 1, dt, t, NULL, NULL), 2);
+  CHECK_NAN(t[0], "unsorted");
+  assert_int_equal(acp_climb_table(NULL, 0.0, 0.0, 0.0, 1, mass, 1, hp, 1, dt, t, x, f), 1);
+  assert_int_equal(acp_climb_table(ac, 0.0, 0.0, 0.0, 1, NULL, 1, hp, 1, dt, t, x, f), 1);
+}
+
 int main(void) {
   const struct CMUnitTest tests[] = {
+      cmocka_unit_test(test_table),
       cmocka_unit_test(test_convergence), cmocka_unit_test(test_energy),
       cmocka_unit_test(test_logarithmic_time), cmocka_unit_test(test_wind),
       cmocka_unit_test(test_rules_of_thumb), cmocka_unit_test(test_points),

@@ -18,7 +18,8 @@ __all__ = ["SchedulePoint", "EnginePoint", "ProfilePoint", "Profile", "CeilingSe
            "RATING_MAXIMUM", "RATING_CLIMB", "RATING_CRUISE", "RATING_IDLE",
            "speed_schedule", "acceleration_factor", "turbofan_thrust_lapse", "turbofan_tsfc",
            "piston_power_lapse", "engine_rating", "engine_thrust", "climb_point",
-           "descent_point", "climb", "descent", "climb_trace", "descent_trace", "ceilings"]
+           "descent_point", "climb", "descent", "climb_trace", "descent_trace", "ceilings",
+           "ClimbTable", "climb_table"]
 
 MODE_LOW_CAS, MODE_CAS, MODE_MACH = _c.ACP_MODE_LOW_CAS, _c.ACP_MODE_CAS, _c.ACP_MODE_MACH
 MODE_VMO, MODE_MMO = _c.ACP_MODE_VMO, _c.ACP_MODE_MMO
@@ -116,3 +117,37 @@ climb_trace.c_function = "acp_climb_trace"
 climb_trace.c_array_function = None
 descent_trace.c_function = "acp_descent_trace"
 descent_trace.c_array_function = None
+
+
+ClimbTable = result_type(
+    "ClimbTable", ("time", "distance", "fuel"),
+    "Climb table (outputs of acp_climb_table): arrays of shape (mass, hp_end, dtemp).")
+
+
+def climb_table(ac, hp_start, wind, step, mass, hp_end, dtemp):
+    """climb_table(ac, hp_start, wind, step, mass, hp_end, dtemp)
+
+    Time (s), distance (m) and fuel (kg) to climb from hp_start to each of the
+    ascending altitudes hp_end, for each mass and ISA deviation (step 0: the
+    default), in one call of acp_climb_table: arrays of shape (len(mass),
+    len(hp_end), len(dtemp)); NaN (and
+    an AcperfWarning with the count) where an altitude is not reached.
+    """
+    import warnings
+
+    from ._core import AcperfWarning
+
+    m = np.atleast_1d(np.asarray(mass, dtype=np.float64))
+    h = np.atleast_1d(np.asarray(hp_end, dtype=np.float64))
+    d = np.atleast_1d(np.asarray(dtemp, dtype=np.float64))
+    bad, t, x, f = _c.acp_climb_table(model_handle(ac), float(hp_start), float(wind), float(step),
+                                      m, h, d)
+    if bad:
+        warnings.warn(f"climb_table: {bad} of {t.size} cells without a result (altitude not "
+                      "reached or invalid arguments); they are NaN", AcperfWarning, stacklevel=2)
+    shape = (m.size, h.size, d.size)
+    return ClimbTable(t.reshape(shape), x.reshape(shape), f.reshape(shape))
+
+
+climb_table.c_function = "acp_climb_table"
+climb_table.c_array_function = None

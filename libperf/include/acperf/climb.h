@@ -135,6 +135,35 @@ ACP_API int acp_descent_trace(const acp_aircraft *ac, double mass, double hp_sta
  */
 ACP_API int acp_ceilings(const acp_aircraft *ac, double mass, double dtemp, acp_ceiling_set *out);
 
+/**
+ * A table of climbs: time, distance and fuel to climb from hp_start to each
+ * altitude of hp_end, for each mass and each ISA deviation.
+ *
+ * One climb per (mass, deviation) is integrated through the altitudes in
+ * ascending order, each altitude a step boundary (a chain of acp_climb() legs),
+ * so a table costs about one climb per (mass, deviation) however many
+ * altitudes it has. A cell agrees with acp_climb() from hp_start to its
+ * altitude within the integration's accuracy (the steps fall differently:
+ * 1e-4 relative is checked with the default step).
+ *
+ * @param ac       aircraft as acp_climb()
+ * @param hp_start start pressure altitude (m)
+ * @param wind     along-track wind (m/s), positive tailwind
+ * @param step     pressure-altitude step (m) as acp_climb()
+ * @param n_mass, mass     masses (kg)
+ * @param n_hp, hp_end     end pressure altitudes (m), ascending, each above hp_start
+ * @param n_dtemp, dtemp   ISA deviations (K)
+ * @param table_time, table_distance, table_fuel  n_mass x n_hp x n_dtemp
+ *                 outputs (s, m, kg), element [(i_mass n_hp + i_hp) n_dtemp + i_dtemp];
+ *                 each may be NULL
+ * @return the number of cells without a result (NaN): invalid arguments (all
+ *         cells), an altitude not reached (it and those above), a failed climb.
+ */
+ACP_API size_t acp_climb_table(const acp_aircraft *ac, double hp_start, double wind, double step,
+                               size_t n_mass, const double *mass, size_t n_hp,
+                               const double *hp_end, size_t n_dtemp, const double *dtemp,
+                               double *table_time, double *table_distance, double *table_fuel);
+
 ACP_END_DECLS
 
 #endif /* ACPERF_CLIMB_H */
