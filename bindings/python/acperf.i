@@ -53,4 +53,30 @@ ACPY_TRACE(acp_profile_point)
 %include "acperf/climb.h"
 ACPY_TRACE(acp_cruise_point)
 %include "acperf/cruise.h"
+/* A trip that fails still says why (infeasible, excess: acperf/mission.h): the
+   exception carries a copy of the output struct as its `result` attribute. */
+%{
+static void acpy_attach_result(PyObject *value) {
+  PyObject *type, *exc, *tb;
+  if (!value) return;
+  PyErr_Fetch(&type, &exc, &tb);
+  PyErr_NormalizeException(&type, &exc, &tb);
+  if (exc && PyObject_SetAttrString(exc, "result", value) < 0) PyErr_Clear();
+  Py_DECREF(value);
+  PyErr_Restore(type, exc, tb);
+}
+%}
+%typemap(out) int acp_trip, int acp_trip_for_zero_fuel_mass {
+  if ($1 != ACP_OK) {
+    acp_trip_result *acpy_copy = (acp_trip_result *)malloc(sizeof *acpy_copy);
+    acpy_raise_call_detail("$symname", args, $1, acpy_detail);
+    if (acpy_copy) {
+      *acpy_copy = *arg4;
+      acpy_attach_result(SWIG_NewPointerObj(SWIG_as_voidptr(acpy_copy),
+                                            SWIGTYPE_p_acp_trip_result, SWIG_POINTER_OWN));
+    }
+    SWIG_fail;
+  }
+  $result = SWIG_Py_Void();
+}
 %include "acperf/mission.h"

@@ -33,14 +33,14 @@ def camel(name):
 
 def idl_params(fn):
     """Parameter names of the IDL method (and of the xcu help), as in the table."""
-    p = (["params"] if fn.aircraft else []) + [a.name for a in fn.args] + \
-        [n for n, _ in fn.text_args]
+    p = fn.range_args + [a.name for a in fn.args] + [n for n, _ in fn.text_args]
     return [camel(n) for n in p]
 
 
 def param_help(fn):
-    h = ([T.PARAMS_HELP] if fn.aircraft else []) + \
-        [a.help + (" - or a one-column range of them" if fn.kind not in ("get",) else "")
+    h = ([T.PARAMS_HELP] if fn.aircraft else []) + ([T.MISSION_HELP] if fn.mission else []) + \
+        [a.help + (" - or a one-column range of them" if fn.kind not in ("get", "trace", "status")
+                   else "")
          for a in fn.args] + [h for _, h in fn.text_args]
     return h
 
@@ -56,8 +56,9 @@ def write_idl(out):
     # that NaN reaches Calc as #NUM! and a range argument can give a column.
     grid = "sequence< sequence< any > >"
     for fn in T.FUNCTIONS:
-        ret = "string" if fn.kind in ("version", "check") else "sequence< sequence< double > >"
-        types = ([grid] if fn.aircraft else []) + [grid] * len(fn.args) + ["any"] * len(fn.text_args)
+        ret = "string" if fn.kind in ("version", "check", "status") \
+            else "sequence< sequence< double > >"
+        types = [grid] * len(fn.range_args) + [grid] * len(fn.args) + ["any"] * len(fn.text_args)
         params = ", ".join(f"[in] {t} {p}" for t, p in zip(types, idl_params(fn)))
         lines.append(f"    {ret} {fn.method}({params});")
     lines += ["};", "", "}; }; };", ""]
@@ -133,7 +134,7 @@ def write_package_files(out, version):
 ''')
     with open(os.path.join(out, "description-en.txt"), "w") as f:
         f.write("Aircraft performance functions (atmosphere, airspeeds, drag, characteristic "
-                "speeds) in operations units, computed by the acperf library. " + CAUTION + "\n")
+                "speeds, schedules, climb, cruise, descent, trip fuel) in operations units, computed by the acperf library. " + CAUTION + "\n")
 
 
 # ---------------------------------------------------------------- headers -----
@@ -167,6 +168,8 @@ def vba_param(ctype, name):
         return f"ByVal {n} As Long"
     if ctype in ("size_t",):
         return f"ByVal {n} As LongPtr"
+    if ctype == "size_t*":
+        return f"ByRef {n} As LongPtr"
     if ctype == "const char*":
         return f"ByVal {n} As String"
     if ctype == "char*":
@@ -204,7 +207,8 @@ def write_vba(out, headers):
                  f" ({ps}){vba_return(ret)}")
     have = {name for _, name, _ in protos}
     for fn in T.FUNCTIONS:
-        for needed in [fn.call] + (["acp_aircraft_new", "acp_aircraft_set"] if fn.aircraft else []):
+        for needed in [fn.call] + (["acp_aircraft_new", "acp_aircraft_set"] if fn.aircraft else []) \
+                + (["acp_mission_new", "acp_mission_set"] if fn.mission else []):
             if fn.kind != "version" and needed not in have:
                 raise SystemExit(f"{fn.name}: {needed} is not in the headers")
     L += ["Private Declare PtrSafe Function lstrlenA Lib \"kernel32\" (ByVal p As LongPtr) As Long",
@@ -212,7 +216,7 @@ def write_vba(out, headers):
           "(ByVal dst As String, ByVal src As LongPtr, ByVal n As LongPtr)",
           "Private Declare PtrSafe Sub acpCopy Lib \"kernel32\" Alias \"RtlMoveMemory\" "
           "(ByVal dst As LongPtr, ByVal src As LongPtr, ByVal n As LongPtr)", "",
-          VBA_HELPERS]
+          VBA_HELPERS, vba_tables()]
     for fn in T.FUNCTIONS:
         L.append(vba_wrapper(fn))
     with open(out, "w", newline="\r\n") as f:
@@ -274,19 +278,82 @@ Private Function acpNumber(ByVal x As Variant, ByRef d As Double) As Boolean
     End If
 End Function
 
+' A composite unit "A/B" of two library units ("NM/t", "lb/h/lbf"): the part
+' after the last slash is B, unless the whole name is a unit of the library.
+Private Function acpPer(ByRef unit As String) As Double
+    Dim k As Long, one As Double
+    acpPer = 1
+    If c_acp_to_si(1, unit, one) = ACP_OK Then Exit Function
+    k = InStrRev(unit, "/")
+    If k = 0 Then Exit Function
+    If c_acp_to_si(1, Mid$(unit, k + 1), acpPer) <> ACP_OK Then Err.Raise 5
+    unit = Left$(unit, k - 1)
+End Function
+
 Private Function acpToSI(ByVal x As Double, ByVal unit As String) As Double
-    Dim si As Double
+    Dim si As Double, per As Double
     If unit = "" Then acpToSI = x: Exit Function
+    per = acpPer(unit)
     If c_acp_to_si(x, unit, si) <> ACP_OK Then Err.Raise 5  ' units come from the table: never
-    acpToSI = si
+    acpToSI = si / per
 End Function
 
 Private Function acpFromSI(ByVal x As Double, ByVal unit As String) As Variant
-    Dim v As Double
+    Dim v As Double, per As Double
     If acpIsNaN(x) Then acpFromSI = CVErr(acpNoResult): Exit Function
     If unit = "" Then acpFromSI = x: Exit Function
+    per = acpPer(unit)
     If c_acp_from_si(x, unit, v) <> ACP_OK Then acpFromSI = CVErr(acpNoResult): Exit Function
-    acpFromSI = v
+    acpFromSI = v * per
+End Function
+
+' The C enum value of a text argument: table "name=value;name=value"; -1 if unknown.
+Private Function acpEnum(ByVal x As Variant, ByVal table As String) As Long
+    Dim s As String, parts() As String, i As Long, kv() As String
+    acpEnum = -1
+    If VarType(x) <> vbString Then Exit Function
+    s = Replace(Replace(LCase$(Trim$(x)), " ", "_"), "-", "_")
+    parts = Split(table, ";")
+    For i = LBound(parts) To UBound(parts)
+        kv = Split(parts(i), "=")
+        If kv(0) = s Then acpEnum = CLng(kv(1)): Exit Function
+    Next i
+End Function
+
+' The mission from a two-column key/value range in operations units; 0 and msg on error.
+' The caller frees it with c_acp_mission_free.
+Private Function acpMission(ByVal rng As Variant, ByRef msg As String) As LongPtr
+    Dim arr As Variant, r As Long, key As String, val As Variant, d As Double
+    Dim mi As LongPtr, st As Long, given As Long, unit As String
+    If TypeName(rng) = "Range" Then arr = rng.Value Else arr = rng
+    If Not IsArray(arr) Then msg = "the mission range must have two columns": Exit Function
+    If UBound(arr, 2) - LBound(arr, 2) <> 1 Then msg = "the mission range must have two columns": Exit Function
+    mi = c_acp_mission_new()
+    For r = LBound(arr, 1) To UBound(arr, 1)
+        val = arr(r, LBound(arr, 2) + 1)
+        If IsEmpty(arr(r, LBound(arr, 2))) And IsEmpty(val) Then GoTo NextRow
+        If VarType(arr(r, LBound(arr, 2))) <> vbString Then msg = "a mission key is not text": GoTo Fail
+        key = Trim$(arr(r, LBound(arr, 2)))
+        unit = acpMissionUnit(key)
+        If unit = "?" Then msg = "unknown mission key " & key: GoTo Fail
+        If key = "cruise_mode" And VarType(val) = vbString Then
+            d = acpEnum(val, acpCruiseModes)
+            If d < 0 Then msg = "unknown cruise_mode " & val: GoTo Fail
+        Else
+            If Not acpNumber(val, d) Then msg = key & ": blank or not a number": GoTo Fail
+            d = acpToSI(d, unit)
+        End If
+        st = c_acp_mission_set(mi, key, d)
+        If st <> ACP_OK Then msg = key & ": " & acpText(c_acp_strerror(st)): GoTo Fail
+        given = given + 1
+NextRow:
+    Next r
+    If given = 0 Then msg = "empty mission range": GoTo Fail
+    acpMission = mi
+    Exit Function
+Fail:
+    c_acp_mission_free mi
+    acpMission = 0
 End Function
 
 Private Function acpStatusError(ByVal st As Long) As Long
@@ -356,20 +423,74 @@ End Function
 """
 
 
+def vba_tables():
+    """The tables of functions.py the VBA helpers need: mission keys and units,
+    cruise modes, the texts of infeasible trips."""
+    L = ["' ---- tables (from functions.py) ----",
+         "Private Const acpCruiseModes As String = \"" +
+         ";".join(f"{k}={v}" for k, v in T.CRUISE_MODES.items()) + "\"", "",
+         "' The operations unit of a mission key; \"?\" for an unknown key.",
+         "Private Function acpMissionUnit(ByVal key As String) As String",
+         "    Select Case key"]
+    for k, unit in T.MISSION_KEYS.items():
+        L.append(f"    Case \"{k}\": acpMissionUnit = \"{unit or ''}\"")
+    L += ["    Case Else: acpMissionUnit = \"?\"", "    End Select", "End Function", "",
+          "' Why a trip is infeasible (acp_trip_result.infeasible and excess), as text.",
+          "Private Function acpInfeasible(ByVal code As Double, ByVal excess As Double) As String",
+          "    Dim what As String, unit As String, v As Variant",
+          "    Select Case code"]
+    for code, (what, unit) in T.TRIP_INFEASIBLE.items():
+        L.append(f"    Case {code}: what = \"{what}\": unit = \"{unit or ''}\"")
+    L += ["    End Select",
+          "    acpInfeasible = what",
+          "    If unit <> \"\" And Not acpIsNaN(excess) Then",
+          "        v = acpFromSI(excess, unit)",
+          "        If Not IsError(v) Then acpInfeasible = what & \" by \" & Format$(v, \"0\") & \" \" & unit",
+          "    End If",
+          "End Function", ""]
+    return "\n".join(L)
+
+
+def vba_literal(x):
+    return repr(int(x)) if isinstance(x, int) or float(x).is_integer() else repr(float(x))
+
+
+def vba_call_args(fn):
+    """The C call's arguments in VBA (fn.layout)."""
+    names = [a.name for a in fn.args]
+    out = []
+    for tok in fn.layout:
+        if tok == "@ac":
+            out.append("ac")
+        elif tok == "@mission":
+            out.append("mi")
+        elif tok in names:
+            out.append(f"si({names.index(tok)})")
+        elif isinstance(tok, str):
+            out.append(f"e_{tok}")
+        else:
+            out.append(vba_literal(tok))
+    return out
+
+
 def vba_wrapper(fn):
     """One VBA function: same name, arguments and units as the Calc function."""
-    params = (["params As Variant"] if fn.aircraft else []) + \
-        [f"{a.name} As Variant" for a in fn.args] + [f"ByVal {n} As String" for n, _ in fn.text_args]
+    params = [f"{r} As Variant" for r in fn.range_args] + \
+        [f"{a.name} As Variant" for a in fn.args] + \
+        [f"ByVal {n} As {'Variant' if n in fn.enums else 'String'}" for n, _ in fn.text_args]
     head = [f"' {fn.desc}", f"Public Function {fn.name}({', '.join(params)}) As Variant"]
     if fn.kind == "version":
         return "\n".join(head + [f"    {fn.name} = acpText(c_acp_version_string())",
                                  "End Function", ""])
-    body = ["    Dim ac As LongPtr, msg As String, st As Long, k As Long, j As Long, n As Long",
-            "    Dim x As Double, ranged As Boolean, res() As Variant"]
+    body = ["    Dim ac As LongPtr, mi As LongPtr, msg As String, st As Long, k As Long, j As Long",
+            "    Dim n As Long, x As Double, ranged As Boolean, res() As Variant"]
+    texty = fn.kind in ("check", "status")
     if fn.aircraft:
-        fail = "msg" if fn.kind == "check" else "CVErr(acpInvalid)"
         body += ["    ac = acpAircraft(params, msg)",
-                 f"    If ac = 0 Then {fn.name} = {fail}: Exit Function"]
+                 f"    If ac = 0 Then {fn.name} = {'msg' if texty else 'CVErr(acpInvalid)'}: Exit Function"]
+    if fn.mission:
+        body += ["    mi = acpMission(mission, msg)",
+                 f"    If mi = 0 Then {fn.name} = {'msg' if texty else 'CVErr(acpInvalid)'}: GoTo Done"]
     if fn.kind == "check":
         body += ["    c_acp_aircraft_free ac", f"    {fn.name} = \"OK\"", "End Function", ""]
         return "\n".join(head + body)
@@ -378,47 +499,83 @@ def vba_wrapper(fn):
                  f"    If st <> ACP_OK Then {fn.name} = CVErr(acpStatusError(st)): Exit Function",
                  f"    {fn.name} = acpFromSI(x, \"\")", "End Function", ""]
         return "\n".join(head + body)
+    for name in fn.enums:
+        table = ";".join(f"{k}={v}" for k, v in fn.enums[name].items())
+        body += [f"    Dim e_{name} As Long: e_{name} = acpEnum({name}, \"{table}\")",
+                 f"    If e_{name} < 0 Then GoTo Invalid"]
     na = len(fn.args)
     nout = len(fn.outputs)
     shown = [fn.outputs.index(o) for o in fn.shown]
     body += [f"    Dim vals(1 To {na}) As Variant, si({na}) As Double, o({nout - 1}) As Double",
              f"    n = acpRows(Array({', '.join(a.name for a in fn.args)}), vals, ranged)",
-             "    If n < 0 Then GoTo Invalid",
-             f"    ReDim res(1 To n, 1 To {len(shown)})",
-             "    For k = 1 To n"]
+             "    If n < 0 Then GoTo Invalid"]
+    if fn.kind in ("trace", "status"):
+        body += ["    If ranged Then GoTo Invalid"]
+    else:
+        body += [f"    ReDim res(1 To n, 1 To {len(shown)})"]
+    body += ["    For k = 1 To n"]
     for i, a in enumerate(fn.args):
         unit = a.unit or ""
         body.append(f"        If Not acpNumber(acpAt(vals, {i + 1}, k), x) Then GoTo Invalid")
         body.append(f"        si({i}) = acpToSI(x, \"{unit}\")")
-    si = ", ".join(f"si({i})" for i in range(na))
-    lead = "ac, " if fn.aircraft else ""
+    cargs = ", ".join(vba_call_args(fn))
     if fn.kind == "convert":
         body += [f"        st = c_acp_to_si(si(0), from_unit, x)",
                  "        If st = ACP_OK Then st = c_acp_from_si(x, to_unit, o(0))",
                  "        If st <> ACP_OK Then GoTo Invalid"]
     elif fn.kind == "value":
-        body += [f"        o(0) = c_{fn.call}({si})"]
+        body += [f"        o(0) = c_{fn.call}({cargs})"]
     elif fn.kind == "out":
         outs = ", ".join(f"o({j})" for j in range(nout))
-        body += [f"        st = c_{fn.call}({si}, {outs})",
+        body += [f"        st = c_{fn.call}({cargs}, {outs})",
                  "        If st = ACP_ERR_INVALID Then GoTo Invalid"]
     elif fn.kind == "struct":
-        body += [f"        st = c_{fn.call}({lead}{si}, o(0))",
+        body += [f"        st = c_{fn.call}({cargs}, o(0))",
                  "        If st = ACP_ERR_INVALID Then GoTo Invalid"]
-    for col, j in enumerate(shown, start=1):
-        unit = fn.outputs[j].unit or ""
-        body.append(f"        res(k, {col}) = acpFromSI(o({j}), \"{unit}\")")
-    body += ["    Next k"]
+    elif fn.kind == "status":
+        body += [f"        st = c_{fn.call}({cargs}, o(0))",
+                 f"        If st = ACP_OK Then",
+                 f"            {fn.name} = \"OK\"",
+                 f"        ElseIf Not acpIsNaN(o(0)) And o(0) > 0 Then",
+                 f"            {fn.name} = acpInfeasible(o(0), o(1))",
+                 "        Else",
+                 f"            {fn.name} = acpText(c_acp_strerror(st))",
+                 "        End If",
+                 "    Next k",
+                 "    GoTo Done"]
+    elif fn.kind == "trace":
+        nt = len(fn.totals)
+        body += [f"        Dim pts() As Double, tot({nt - 1}) As Double, cap As LongPtr, cnt As LongPtr",
+                 "        cap = 256",
+                 "        Do",
+                 f"            ReDim pts(0 To cap * {nout} - 1)",
+                 f"            st = c_{fn.call}({cargs}, cap, pts(0), cnt, tot(0))",
+                 "            If st = ACP_ERR_RANGE And cnt > cap Then cap = cnt Else Exit Do",
+                 "        Loop",
+                 "        If st = ACP_ERR_INVALID Then GoTo Invalid",
+                 f"        If st <> ACP_OK Then {fn.name} = CVErr(acpNoResult): GoTo Done",
+                 f"        ReDim res(1 To cnt, 1 To {len(shown)})",
+                 "        For j = 1 To cnt"]
+        for col, jj in enumerate(shown, start=1):
+            unit = fn.outputs[jj].unit or ""
+            body.append(f"            res(j, {col}) = acpFromSI(pts((j - 1) * {nout} + {jj}), \"{unit}\")")
+        body += ["        Next j", "    Next k", f"    {fn.name} = res", "    GoTo Done"]
+    if fn.kind not in ("status", "trace"):
+        for col, j in enumerate(shown, start=1):
+            unit = fn.outputs[j].unit or ""
+            body.append(f"        res(k, {col}) = acpFromSI(o({j}), \"{unit}\")")
+        body += ["    Next k"]
+        if fn.returns_row:
+            body += [f"    {fn.name} = res"]
+        else:
+            body += [f"    If ranged Then {fn.name} = res Else {fn.name} = res(1, 1)"]
+        body += ["    GoTo Done"]
+    body += ["Invalid:", f"    {fn.name} = CVErr(acpInvalid)", "Done:"]
     if fn.aircraft:
-        body += ["    c_acp_aircraft_free ac"]
-    if fn.returns_row:
-        body += [f"    {fn.name} = res"]
-    else:
-        body += [f"    If ranged Then {fn.name} = res Else {fn.name} = res(1, 1)"]
-    body += ["    Exit Function", "Invalid:"]
-    if fn.aircraft:
-        body += ["    c_acp_aircraft_free ac"]
-    body += [f"    {fn.name} = CVErr(acpInvalid)", "End Function", ""]
+        body += ["    If ac <> 0 Then c_acp_aircraft_free ac"]
+    if fn.mission:
+        body += ["    If mi <> 0 Then c_acp_mission_free mi"]
+    body += ["End Function", ""]
     return "\n".join(head + body)
 
 

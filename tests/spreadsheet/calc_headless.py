@@ -31,6 +31,7 @@ import reference as R  # noqa: E402
 from office import Office  # noqa: E402
 
 RTOL = 1e-12
+TRACE_ROWS = 40
 BY_METHOD = {f.method.upper(): f for f in T.FUNCTIONS}
 
 
@@ -65,15 +66,23 @@ def write_test_workbook(path):
             air[(r, col)] = k
             if v is not None:
                 air[(r, col + 1)] = v
+    mis = {}
+    for kind, col in C.MISSION_COLUMNS.items():
+        for r, (k, v) in enumerate(C.MISSIONS[kind]):
+            mis[(r, col)] = k
+            if v is not None:
+                mis[(r, col + 1)] = v
     cells, row = {}, 0
-    book = [("Aircraft", air), ("Inputs", dict(C.INPUTS))]
+    book = [("Aircraft", air), ("Inputs", dict(C.INPUTS)), ("Mission", mis)]
     for name, args in C.CASES:
         fn = T.BY_NAME[name]
         n = next((len(resolve_ref(a, book)) for a in args
                   if isinstance(a, C.Ref) and a.sheet == "Inputs"
                   and isinstance(resolve_ref(a, book), list)), None)
         rows = n if n is not None else 1
-        cols = len(fn.shown) if fn.shown else 1
+        if fn.kind == "trace":
+            rows = TRACE_ROWS      # more than a trace has: the rows past it show #N/A
+        cols = len(fn.shown) if fn.shown and fn.kind != "status" else 1
         text = fods.PREFIX + fn.method.upper() + "(" + ";".join(arg_text(a) for a in args) + ")"
         cells[(row, 0)] = name
         cells[(row, 1)] = fods.Formula(text, rows, cols) if (rows, cols) != (1, 1) \
@@ -94,7 +103,7 @@ def resolve_ref(ref, book):
     grid = [[sheets[s].get((r, c)) for c in range(c0, c1 + 1)] for r in range(r0, r1 + 1)]
     if (r0, c0) == (r1, c1) and not isinstance(ref, C.Ref):
         return grid[0][0]
-    if c1 - c0 == 1 and s == "Aircraft" or (c1 - c0 == 1 and isinstance(grid[0][0], str)):
+    if c1 - c0 == 1 and s in ("Aircraft", "Mission") or (c1 - c0 == 1 and isinstance(grid[0][0], str)):
         return [tuple(g) for g in grid]
     if r0 == r1 or c0 == c1:
         return [v for g in grid for v in g]
@@ -127,7 +136,7 @@ def evaluate_book(book):
                     continue
                 grid = [[cell_value(rs, rr, cc) for cc in range(c0, c1 + 1)]
                         for rr in range(r0, r1 + 1)]
-                if fn.aircraft and not args:
+                if len(args) < len(fn.range_args):
                     args.append([tuple(g) for g in grid])
                 elif r0 == r1 or c0 == c1:
                     args.append([v for g in grid for v in g])

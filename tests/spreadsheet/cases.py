@@ -11,6 +11,10 @@ from collections import namedtuple
 
 Ref = namedtuple("Ref", "sheet range")
 
+
+def _c(col):
+    return chr(65 + col) if col < 26 else chr(64 + col // 26) + chr(65 + col % 26)
+
 ROOT = os.path.normpath(os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", ".."))
 RJ_FILE = os.path.join(ROOT, "examples", "aircraft", "regional_jet.toml")
 TWIN_FILE = os.path.join(ROOT, "examples", "aircraft", "light_twin.toml")
@@ -28,6 +32,24 @@ CAS_COLUMN, BLOCK = Ref("Inputs", "D1:D3"), Ref("Inputs", "E1:F2")
 INPUTS = {(r, 0): v for r, v in enumerate([0.0, 5000.0, 10000.0, 25000.0, 37000.0, 45000.0])}
 INPUTS.update({(0, 2): "abc", (0, 3): 150.0, (1, 3): 250.0, (2, 3): 320.0,
                (0, 4): 1.0, (0, 5): 2.0, (1, 4): 3.0, (1, 5): 4.0})
+
+# Mission ranges on the sheet "Mission" (two columns each; operations units, docs/spreadsheet.md).
+MISSIONS = {
+    "M500": [("distance", 500.0), ("cruise_altitude", 35000.0)],
+    "MWIND": [("distance", 500.0), ("cruise_altitude", 33000.0), ("origin_altitude", 1200.0),
+              ("destination_altitude", 300.0), ("isa_deviation", 10.0), ("wind", -40.0),
+              ("cruise_mode", "long_range"), ("alternate_fuel", 900.0), ("taxi_time", 12.0),
+              ("final_reserve_time", 30.0), ("holding_height", 1500.0)],
+    "MSHORT": [("distance", 40.0), ("cruise_altitude", 35000.0)],
+    "MHIGH": [("distance", 500.0), ("cruise_altitude", 41000.0)],
+    "MTEXT": [("distance", "500"), ("cruise_altitude", 35000.0)],
+    "MBLANK": [("distance", None), ("cruise_altitude", 35000.0)],
+    "MUNKNOWN": [("distance", 500.0), ("cruise_altitude", 35000.0), ("route_name", 3.0)],
+    "MNODIST": [("cruise_altitude", 35000.0)],
+    "TWIN300": [("distance", 300.0), ("cruise_altitude", 18000.0)],
+}
+MISSION_COLUMNS = {k: 3 * i for i, k in enumerate(MISSIONS)}
+MISSION = {k: Ref("Mission", f"{_c(c)}1:{_c(c + 1)}20") for k, c in MISSION_COLUMNS.items()}
 
 CASES = [
     ("ACP_VERSION", []),
@@ -69,4 +91,66 @@ CASES = [
     ("ACP_SPEEDS_CAS", [RJ, 30000.0, HP_COLUMN, 0.0]), ("ACP_SPEEDS_CAS", [RJ, 0.5, 10000.0, 0.0]),
     ("ACP_LD_MAX", [RJ, 30000.0, 35000.0, 0.0]),
     ("ACP_GLIDE", [RJ, 30000.0, 20000.0, 0.0]), ("ACP_GLIDE", [TWIN, 3000.0, 8000.0, 0.0]),
+    # schedules, climb, descent
+    ("ACP_SPEED_SCHEDULE", [5000.0, 0.0, 250.0, 10000.0, 290.0, 0.76, 320.0, 0.82]),
+    ("ACP_SPEED_SCHEDULE", [20000.0, 10.0, 250.0, 10000.0, 290.0, 0.76, 320.0, 0.82]),
+    ("ACP_SPEED_SCHEDULE", [36000.0, -5.0, 250.0, 10000.0, 290.0, 0.76, 320.0, 0.82]),
+    ("ACP_SPEED_SCHEDULE", [30000.0, 0.0, 250.0, 10000.0, 340.0, 0.86, 320.0, 0.82]),
+    ("ACP_SPEED_SCHEDULE", [HP_COLUMN, 0.0, 250.0, 10000.0, 290.0, 0.76, 320.0, 0.82]),
+    ("ACP_SPEED_SCHEDULE", [20000.0, 0.0, -250.0, 10000.0, 290.0, 0.76, 320.0, 0.82]),
+    ("ACP_SPEED_SCHEDULE", [400000.0, 0.0, 250.0, 10000.0, 290.0, 0.76, 320.0, 0.82]),
+    ("ACP_CLIMB_POINT", [RJ, 36000.0, 20000.0, 0.0]), ("ACP_CLIMB_POINT", [RJ, 33000.0, 5000.0, 15.0]),
+    ("ACP_CLIMB_POINT", [TWIN, 5200.0, 10000.0, 0.0]), ("ACP_CLIMB_POINT", [RJ, 36000.0, HP_COLUMN, 0.0]),
+    ("ACP_CLIMB_POINT", [RJ, -36000.0, 20000.0, 0.0]), ("ACP_CLIMB_POINT", [RJ, 36000.0, 400000.0, 0.0]),
+    ("ACP_DESCENT_POINT", [RJ, 32000.0, 30000.0, 0.0]), ("ACP_DESCENT_POINT", [RJ, 32000.0, 8000.0, -10.0]),
+    ("ACP_CLIMB_RATE", [RJ, 36000.0, 31000.0, 5.0]), ("ACP_CLIMB_RATE", [RJ, 38000.0, CAS_COLUMN, 0.0]),
+    ("ACP_CLIMB_RATE", [TWIN, 5000.0, 8000.0, 0.0]), ("ACP_CLIMB_RATE", [BLANK_VALUE, 36000.0, 31000.0, 0.0]),
+    ("ACP_CLIMB", [RJ, 36000.0, 1500.0, 35000.0, 0.0, 0.0]),
+    ("ACP_CLIMB", [RJ, 39000.0, 0.0, 33000.0, 12.0, -30.0]),
+    ("ACP_CLIMB", [TWIN, 5400.0, 500.0, 18000.0, 0.0, 20.0]),
+    ("ACP_CLIMB", [RJ, 36000.0, 35000.0, 1500.0, 0.0, 0.0]),
+    ("ACP_CLIMB", [RJ, 40000.0, 0.0, 60000.0, 0.0, 0.0]),
+    ("ACP_CLIMB", [RJ, 36000.0, 1500.0, TEXT, 0.0, 0.0]),
+    ("ACP_DESCENT", [RJ, 31000.0, 35000.0, 1500.0, 0.0, 0.0]),
+    ("ACP_DESCENT", [RJ, 31000.0, 33000.0, 0.0, -8.0, 40.0]),
+    ("ACP_DESCENT", [RJ, 31000.0, 1500.0, 35000.0, 0.0, 0.0]),
+    ("ACP_CLIMB_TRACE", [RJ, 36000.0, 1500.0, 35000.0, 0.0, 0.0]),
+    ("ACP_CLIMB_TRACE", [RJ, 36000.0, 1500.0, 35000.0, 0.0, CAS_COLUMN]),
+    ("ACP_CLIMB_TRACE", [RJ, 36000.0, 35000.0, 1500.0, 0.0, 0.0]),
+    ("ACP_DESCENT_TRACE", [RJ, 31000.0, 35000.0, 0.0, 5.0, 20.0]),
+    ("ACP_CEILINGS", [RJ, 36000.0, 0.0]), ("ACP_CEILINGS", [RJ, 30000.0, 15.0]),
+    ("ACP_CEILINGS", [TWIN, 5400.0, 0.0]), ("ACP_CEILINGS", [RJ, 2e7, 0.0]),
+    # cruise
+    ("ACP_SAR", [RJ, 34000.0, 35000.0, 0.0, 450.0, 0.0]), ("ACP_SAR", [RJ, 34000.0, 35000.0, 0.0, 450.0, -50.0]),
+    ("ACP_SAR", [RJ, 34000.0, 35000.0, 0.0, CAS_COLUMN, 0.0]), ("ACP_SAR", [RJ, 34000.0, 35000.0, 0.0, 900.0, 0.0]),
+    ("ACP_SAR", [TWIN, 5000.0, 18000.0, 0.0, 210.0, 10.0]), ("ACP_SAR", [RJ, 34000.0, 35000.0, 0.0, BLANK, 0.0]),
+    ("ACP_CRUISE_SPEED", [RJ, 34000.0, 35000.0, 0.0, 0.0, 0.0, "fixed_mach"]),
+    ("ACP_CRUISE_SPEED", [RJ, 34000.0, 35000.0, 0.0, 0.0, 0.0, "max_range"]),
+    ("ACP_CRUISE_SPEED", [RJ, 34000.0, 35000.0, 5.0, -40.0, 0.0, "Long range"]),
+    ("ACP_CRUISE_SPEED", [RJ, 34000.0, 33000.0, 0.0, 0.0, 30.0, "economy"]),
+    ("ACP_CRUISE_SPEED", [RJ, 34000.0, 15000.0, 0.0, 0.0, 0.0, "max_endurance"]),
+    ("ACP_CRUISE_SPEED", [TWIN, 5000.0, 18000.0, 0.0, 0.0, 0.0, "long_range"]),
+    ("ACP_CRUISE_SPEED", [RJ, 34000.0, 35000.0, 0.0, 0.0, 0.0, "fastest"]),
+    ("ACP_CRUISE_SPEED", [RJ, 34000.0, 35000.0, 0.0, 0.0, 0.0, 3.0]),
+    ("ACP_CRUISE_SPEED", [RJ, 34000.0, 60000.0, 0.0, 0.0, 0.0, "fixed_mach"]),
+    ("ACP_CRUISE", [RJ, 34000.0, 35000.0, 0.0, 0.0, 400.0, 0.0, "fixed_mach"]),
+    ("ACP_CRUISE", [RJ, 34000.0, 33000.0, 8.0, 30.0, 250.0, 0.0, "long_range"]),
+    ("ACP_CRUISE", [RJ, 34000.0, 35000.0, 0.0, 0.0, -400.0, 0.0, "fixed_mach"]),
+    ("ACP_CRUISE", [RJ, 34000.0, 35000.0, 0.0, 0.0, 400.0, 0.0, TEXT]),
+    ("ACP_BREGUET_RANGE", [450.0, 0.62, 16.0, 40000.0, 34000.0]),
+    ("ACP_BREGUET_RANGE", [CAS_COLUMN, 0.6, 15.0, 40000.0, 34000.0]),
+    ("ACP_BREGUET_RANGE", [450.0, 0.62, 16.0, 34000.0, 40000.0]),
+    # trip fuel
+    ("ACP_TRIP_FUEL", [RJ, MISSION["M500"], 30000.0]), ("ACP_TRIP_STATUS", [RJ, MISSION["M500"], 30000.0]),
+    ("ACP_TRIP_FUEL", [RJ, MISSION["MWIND"], 31000.0]), ("ACP_TRIP_STATUS", [RJ, MISSION["MWIND"], 31000.0]),
+    ("ACP_TRIP_FUEL", [RJ, MISSION["M500"], 36000.0]), ("ACP_TRIP_STATUS", [RJ, MISSION["M500"], 36000.0]),
+    ("ACP_TRIP_FUEL", [RJ, MISSION["MSHORT"], 30000.0]), ("ACP_TRIP_STATUS", [RJ, MISSION["MSHORT"], 30000.0]),
+    ("ACP_TRIP_FUEL", [RJ, MISSION["MHIGH"], 30000.0]), ("ACP_TRIP_STATUS", [RJ, MISSION["MHIGH"], 30000.0]),
+    ("ACP_TRIP_FUEL", [RJ, MISSION["MTEXT"], 30000.0]), ("ACP_TRIP_STATUS", [RJ, MISSION["MTEXT"], 30000.0]),
+    ("ACP_TRIP_FUEL", [RJ, MISSION["MBLANK"], 30000.0]), ("ACP_TRIP_STATUS", [RJ, MISSION["MBLANK"], 30000.0]),
+    ("ACP_TRIP_FUEL", [RJ, MISSION["MUNKNOWN"], 30000.0]),
+    ("ACP_TRIP_FUEL", [RJ, MISSION["MNODIST"], 30000.0]), ("ACP_TRIP_STATUS", [RJ, MISSION["MNODIST"], 30000.0]),
+    ("ACP_TRIP_FUEL", [TWIN, MISSION["TWIN300"], 4300.0]),
+    ("ACP_TRIP_FUEL", [RJ, MISSION["M500"], TEXT]), ("ACP_TRIP_FUEL", [INCOMPLETE, MISSION["M500"], 30000.0]),
+    ("ACP_TRIP_STATUS", [INCOMPLETE, MISSION["M500"], 30000.0]),
 ]

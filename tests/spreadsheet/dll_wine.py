@@ -35,7 +35,8 @@ HEADERS = sorted(os.path.join(C.ROOT, "libperf", "include", "acperf", f)
 
 def signature(protos, name):
     ret, params = protos[name]
-    letters = "".join("A" if "acp_aircraft" in t else "d" if t == "double" else "P"
+    letters = "".join("A" if "acp_aircraft" in t else "M" if "acp_mission" in t
+                      else "d" if t == "double" else "i" if t == "int" else "P"
                       for t, _ in params)
     return ("d" if ret == "double" else "i") + ":" + letters
 
@@ -49,30 +50,57 @@ def main():
     a = ap.parse_args()
     protos = {n: (r, p) for r, n, p in generate.parse_headers(HEADERS)}
     aircraft = {C.RJ: R.aircraft_rows(C.RJ_FILE), C.TWIN: R.aircraft_rows(C.TWIN_FILE)}
-    script, expect, current = [], {}, None
+    missions = {ref: C.MISSIONS[k] for k, ref in C.MISSION.items()}
+    script, expect, current, current_mission = [], {}, None, None
     for i, (name, args) in enumerate(C.CASES):
         fn = T.BY_NAME[name]
+        # Traces (struct arrays) and the trip status text are the VBA wrappers'
+        # business: their C calls are not made here (docs/spreadsheet.md).
         if fn.kind not in ("value", "out", "struct"):
             continue
-        if fn.aircraft:
-            if args[0] not in aircraft:
-                continue
-            nums = args[1:]
-        else:
-            nums = args
+        nr = len(fn.range_args)
+        if fn.aircraft and args[0] not in aircraft:
+            continue
+        if fn.mission:
+            rows = missions.get(args[1])
+            if rows is None or not all(k in T.MISSION_KEYS and isinstance(v, float)
+                                       for k, v in rows):
+                continue   # bad mission ranges are the VBA wrapper's business
+        nums, texts = args[nr:nr + len(fn.args)], args[nr + len(fn.args):]
         if not all(isinstance(x, float) for x in nums):
             continue  # ranges and text are the VBA wrapper's business, not the DLL's
+        if not all(isinstance(t, str) for t in texts):
+            continue
+        enum = {}
+        for (tname, _), t in zip(fn.text_args, texts):
+            key = t.strip().lower().replace(" ", "_").replace("-", "_")
+            if key not in fn.enums.get(tname, {}):
+                break
+            enum[tname] = fn.enums[tname][key]
+        if len(enum) != len(texts):
+            continue
         if fn.aircraft and current != args[0]:
             current = args[0]
             script.append("aircraft")
             for k, v in aircraft[current]:
                 script.append(f"{'text' if isinstance(v, str) else 'set'} {k} "
                               f"{v if isinstance(v, str) else repr(float(v))}")
-        ins = " ".join(f"{x.unit or '-'} {v!r}" for x, v in zip(fn.args, nums))
+        if fn.mission and current_mission != args[1]:
+            current_mission = args[1]
+            script.append("mission")
+            for k, v in missions[args[1]]:
+                script.append(f"mset {k} {T.MISSION_KEYS[k] or '-'} {float(v)!r}")
+        # the C arguments in order (fn.layout), models left out: unit and value
+        by_name = {a.name: (a.unit or "-", v) for a, v in zip(fn.args, nums)}
+        by_name.update({k: ("-", float(v)) for k, v in enum.items()})
+        cin = [by_name[t] if isinstance(t, str) else ("-", float(t))
+               for t in fn.layout if t not in ("@ac", "@mission")]
+        ins = " ".join(f"{u} {v!r}" for u, v in cin)
         outs = " ".join(o.unit or "-" for o in fn.outputs)
-        script.append(f"call c{i} {fn.call} {signature(protos, fn.call)} {len(nums)} {ins} "
+        script.append(f"call c{i} {fn.call} {signature(protos, fn.call)} {len(cin)} {ins} "
                       f"{len(fn.outputs)} {outs}")
-        ref_args = ([aircraft[args[0]]] if fn.aircraft else []) + list(nums)
+        ref_args = ([aircraft[args[0]]] if fn.aircraft else []) + \
+            ([missions[args[1]]] if fn.mission else []) + list(nums) + list(texts)
         expect[f"c{i}"] = (fn, R.expected(name, ref_args)[0])
     script.append("symbols " + " ".join(sorted(protos)))
 
@@ -106,7 +134,7 @@ def main():
             continue
         vals = dict(zip([o.field for o in fn.outputs], got[cid][2:]))
         shown = [vals[o.field] for o in fn.shown]
-        tol = RTOL_SEARCH if fn.partial or fn.kind == "struct" and fn.aircraft and "speeds" in fn.call or "glide" in fn.call else RTOL_CLOSED
+        tol = RTOL_SEARCH if fn.partial or fn.search or fn.kind == "struct" and fn.aircraft and "speeds" in fn.call or "glide" in fn.call else RTOL_CLOSED
         kind = "search" if tol == RTOL_SEARCH else "closed"
         for g, x in zip(shown, want):
             gv = float(g)
@@ -122,6 +150,8 @@ def main():
                 failed.append(f"{cid} {fn.name}: got {g}, want {x}")
     for f in failed:
         print("FAIL", f)
+    called = sorted({fn.name for fn, _ in expect.values()})
+    print(f"{len(called)} of {len(T.FUNCTIONS)} spreadsheet functions called: {' '.join(called)}")
     print(f"{len(expect)} calls through LoadLibrary/GetProcAddress under wine, {len(protos)} "
           f"symbols looked up; largest relative difference: closed forms {worst['closed']:.2e}, "
           f"numerical searches {worst['search']:.2e}")

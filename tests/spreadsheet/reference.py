@@ -106,6 +106,139 @@ def atmos(hp, dt):
             a.dynamic_viscosity, a.kinematic_viscosity]
 
 
+def nm(x): return u.from_si(x, "NM")
+def per_t(sar): return u.from_si(sar, "NM") * 1000.0   # m/kg -> NM per 1000 kg
+def mins(x): return x / u.MINUTE
+def kg_h(x): return x * u.HOUR
+def fpm(x): return u.mps_to_fpm(x)
+
+
+def _quiet(f, *a):
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        return f(*a)
+
+
+def schedule(hp, dt, cas_low, hp_limit, cas, mach, vmo, mmo):
+    s = acperf.speed_schedule(ft(hp), dt, kt(cas_low), ft(hp_limit), kt(cas), mach, kt(vmo), mmo)
+    return [s.mode, to_kt(s.cas), s.mach, to_kt(s.tas), to_ft(s.crossover), s.acceleration_factor]
+
+
+def profile_point(f, ac, m, hp, dt):
+    p = f(ac, m, ft(hp), dt, 0.0)
+    return [fpm(p.rate), to_kt(p.cas), p.mach, to_kt(p.tas), u.rad_to_deg(p.gradient),
+            kg_h(p.fuel_flow), p.mode]
+
+
+def profile(f, ac, m, h0, h1, dt, w):
+    p = f(ac, m, ft(h0), ft(h1), dt, kt(w), 0.0)
+    return [mins(p.time), nm(p.distance), p.fuel, p.mass_end]
+
+
+def trace(f, ac, m, h0, h1, dt, w):
+    t, _ = f(ac, m, ft(h0), ft(h1), dt, kt(w), 0.0)
+    return [[mins(t.time[i]), nm(t.distance[i]), to_ft(t.hp[i]), t.mass[i], to_kt(t.cas[i]),
+             t.mach[i], to_kt(t.tas[i]), fpm(t.rate[i]), kg_h(t.fuel_flow[i])]
+            for i in range(len(t.time))]
+
+
+def ceilings(ac, m, dt):
+    c = acperf.ceilings(ac, m, dt)
+    return [to_ft(c.service_ceiling), to_ft(c.max_climb_altitude), to_ft(c.buffet_altitude),
+            to_ft(c.max_cruise_altitude), to_ft(c.optimum_altitude)]
+
+
+MODES = {"fixed_mach": acperf.CRUISE_FIXED_MACH, "max_range": acperf.CRUISE_MAX_RANGE,
+         "long_range": acperf.CRUISE_LONG_RANGE, "economy": acperf.CRUISE_ECONOMY,
+         "max_endurance": acperf.CRUISE_MAX_ENDURANCE}
+
+
+def mode_of(text):
+    key = text.strip().lower().replace(" ", "_").replace("-", "_")
+    if key not in MODES:
+        raise Invalid(text)
+    return MODES[key]
+
+
+def cruise_speed(ac, m, hp, dt, w, ci, mode):
+    p = acperf.cruise_speed(ac, mode_of(mode), ci, m, ft(hp), dt, kt(w))
+    return [p.mach, to_kt(p.tas), to_kt(p.cas), kg_h(p.fuel_flow), per_t(p.sar), p.limit]
+
+
+def cruise(ac, m, hp, dt, w, dist, ci, mode):
+    r = acperf.cruise(ac, mode_of(mode), ci, m, ft(hp), dt, kt(w), acperf.END_DISTANCE,
+                      u.nm_to_m(dist))
+    return [mins(r.time), r.fuel, r.mass_end, per_t(r.sar_mean)]
+
+
+def breguet(v, tsfc, ld, m0, m1):
+    c = tsfc * u.LB / u.HOUR / u.to_si(1.0, "lbf")      # lb/(lbf h) -> kg/(N s)
+    return nm(acperf.breguet_range(kt(v), c, ld, m0, m1))
+
+
+# Mission range keys in operations units -> SI (docs/spreadsheet.md).
+MISSION_UNITS = {"distance": u.nm_to_m, "cruise_altitude": ft, "origin_altitude": ft,
+                 "destination_altitude": ft, "isa_deviation": float, "wind": kt,
+                 "cruise_mode": float, "cost_index": float, "step_climb": ft, "climb_step": ft,
+                 "cruise_step": u.nm_to_m, "taxi_time": lambda x: x * u.MINUTE,
+                 "taxi_fuel": float, "contingency_fraction": float, "contingency_minimum": float,
+                 "alternate_fuel": float, "final_reserve_time": lambda x: x * u.MINUTE,
+                 "holding_height": ft}
+
+
+def mission(rows):
+    """acperf.Mission from the two-column rows (operations units); Invalid as the add-in."""
+    mi = acperf.Mission()
+    keys = [r for r in rows if not (r[0] is None and r[1] is None)]
+    if not keys:
+        raise Invalid("empty")
+    for k, v in keys:
+        if k not in MISSION_UNITS:
+            raise Invalid(k)
+        if k == "cruise_mode" and isinstance(v, str):
+            v = mode_of(v)
+        elif isinstance(v, bool) or not isinstance(v, (int, float)):
+            raise Invalid(k)
+        try:
+            mi[k] = MISSION_UNITS[k](v)
+        except acperf.AcperfError as e:
+            raise Invalid(str(e))
+    return mi
+
+
+def trip(ac, mi, zfm):
+    r = acperf.trip_for_zero_fuel_mass(ac, mi, zfm)
+    return [r.trip_fuel, r.block_fuel, mins(r.trip_time), mins(r.block_time), r.takeoff_mass,
+            r.landing_mass]
+
+
+# Why a trip is infeasible, in the words of docs/spreadsheet.md (code: text, unit of excess).
+REASONS = {1: ("take-off mass above mass_max_takeoff", "kg"),
+           2: ("landing mass above mass_max_landing", "kg"),
+           3: ("block fuel above fuel_capacity", "kg"),
+           4: ("zero-fuel mass above mass_max_zero_fuel", "kg"),
+           5: ("distance shorter than the climb and descent", "NM"),
+           6: ("cruise altitude above max_altitude", "ft"),
+           7: ("the cruise altitude cannot be reached", None),
+           8: ("level flight cannot be held in cruise or holding", None),
+           9: ("cruise altitude not above the origin and destination", "ft"),
+           10: ("the fuel needed exceeds the mass available", "kg")}
+
+
+def trip_status(ac, mi, zfm):
+    try:
+        acperf.trip_for_zero_fuel_mass(ac, mi, zfm)
+        return "OK"
+    except acperf.AcperfError as e:
+        r = getattr(e, "result", None)
+        if r is None or not math.isfinite(r.infeasible) or int(r.infeasible) not in REASONS:
+            return NOT_OK
+        what, unit = REASONS[int(r.infeasible)]
+        if unit is None or not math.isfinite(r.excess):
+            return what
+        return f"{what} by {u.from_si(r.excess, unit):.0f} {unit}"
+
+
 # name: (aircraft?, function of the numeric/text arguments -> value or row)
 REFERENCE = {
     "ACP_VERSION": (False, lambda: acperf.version_string()),
@@ -140,8 +273,27 @@ REFERENCE = {
     "ACP_SPEEDS_MACH": (True, lambda ac, m, hp, dt: speeds("mach", ac, m, hp, dt, None)),
     "ACP_LD_MAX": (True, lambda ac, m, hp, dt: speeds("tas", ac, m, hp, dt, "kt")[4]),
     "ACP_GLIDE": (True, glide),
+    "ACP_SPEED_SCHEDULE": (False, schedule),
+    "ACP_CLIMB_POINT": (True, lambda ac, m, hp, dt: profile_point(acperf.climb_point, ac, m, hp, dt)),
+    "ACP_DESCENT_POINT": (True, lambda ac, m, hp, dt: profile_point(acperf.descent_point, ac, m, hp, dt)),
+    "ACP_CLIMB_RATE": (True, lambda ac, m, hp, dt: profile_point(acperf.climb_point, ac, m, hp, dt)[0]),
+    "ACP_CLIMB": (True, lambda ac, *a: profile(acperf.climb, ac, *a)),
+    "ACP_DESCENT": (True, lambda ac, *a: profile(acperf.descent, ac, *a)),
+    "ACP_CLIMB_TRACE": (True, lambda ac, *a: trace(acperf.climb_trace, ac, *a)),
+    "ACP_DESCENT_TRACE": (True, lambda ac, *a: trace(acperf.descent_trace, ac, *a)),
+    "ACP_CEILINGS": (True, ceilings),
+    "ACP_SAR": (True, lambda ac, m, hp, dt, v, w: per_t(acperf.specific_air_range(ac, m, ft(hp), dt, kt(v), kt(w)))),
+    "ACP_CRUISE_SPEED": (True, cruise_speed),
+    "ACP_CRUISE": (True, cruise),
+    "ACP_BREGUET_RANGE": (False, breguet),
+    "ACP_TRIP_FUEL": (2, trip),
+    "ACP_TRIP_STATUS": (2, trip_status),
 }
-TEXT_ARGS = {"ACP_CONVERT": 2, "ACP_AIRCRAFT_VALUE": 1}
+TEXT_ARGS = {"ACP_CONVERT": 2, "ACP_AIRCRAFT_VALUE": 1, "ACP_CRUISE_SPEED": 1, "ACP_CRUISE": 1}
+TABLES = {"ACP_CLIMB_TRACE", "ACP_DESCENT_TRACE"}     # one row per point, single arguments
+WIDTH = {"ACP_ISA": 6, "ACP_DRAG": 7, "ACP_WIND_TRIANGLE": 3, "ACP_SPEED_SCHEDULE": 6,
+         "ACP_CLIMB_POINT": 7, "ACP_DESCENT_POINT": 7, "ACP_CLIMB": 4, "ACP_DESCENT": 4,
+         "ACP_CEILINGS": 5, "ACP_CRUISE_SPEED": 6, "ACP_CRUISE": 4, "ACP_TRIP_FUEL": 6}
 
 
 def _num(x):
@@ -162,10 +314,12 @@ def expected(name, args):
     A numeric argument may be a list (a one-column range): one row each."""
     needs_ac, f = REFERENCE[name]
     args = list(args)
+    texty = name in ("ACP_AIRCRAFT_CHECK", "ACP_TRIP_STATUS")
     try:
         ac = aircraft(args.pop(0)) if needs_ac else None
+        mi = [mission(args.pop(0))] if needs_ac == 2 else []
     except Invalid as e:
-        return [[NOT_OK if name == "ACP_AIRCRAFT_CHECK" else VALUE]]
+        return [[NOT_OK if texty else VALUE]]
     ntext = TEXT_ARGS.get(name, 0)
     texts = args[len(args) - ntext:] if ntext else []
     nums = args[:len(args) - ntext] if ntext else args
@@ -175,6 +329,8 @@ def expected(name, args):
     if len({len(a) for a in lists}) > 1:
         return [[VALUE]]      # range arguments of different lengths
     n = len(lists[0]) if lists else None
+    if n is not None and (name in TABLES or name == "ACP_TRIP_STATUS"):
+        return [[VALUE]]      # single values only
     rows = []
     for k in range(n or 1):
         try:
@@ -182,16 +338,25 @@ def expected(name, args):
         except Invalid:
             return [[VALUE]]
         try:
-            r = f(*([ac] if needs_ac else []), *point, *texts)
+            r = f(*([ac] if needs_ac else []), *mi, *point, *texts)
+        except Invalid:
+            return [[VALUE]]
         except acperf.AcperfError as e:
             if name in ("ACP_CONVERT", "ACP_AIRCRAFT_VALUE") and e.status in INVALID:
                 return [[VALUE]]
             r = VALUE if e.status in INVALID else NUM
-            if name in ("ACP_ISA", "ACP_DRAG", "ACP_WIND_TRIANGLE"):
+            if name in TABLES:
+                return [[r]]
+            if name in WIDTH:
                 if r == VALUE:
                     return [[VALUE]]
-                r = [NUM] * {"ACP_ISA": 6, "ACP_DRAG": 7, "ACP_WIND_TRIANGLE": 3}[name]
+                r = [NUM] * WIDTH[name]
         except KeyError:
             return [[VALUE]]
+        if name in TABLES:
+            return [[_cell(x) for x in row] for row in r]
+        if r is NOT_OK:
+            rows.append([NOT_OK])
+            continue
         rows.append([_cell(x) for x in r] if isinstance(r, list) else [_cell(r)])
     return rows
