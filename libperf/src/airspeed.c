@@ -30,15 +30,23 @@ int acp_pressure_ratio_to_mach(double ratio, double *mach) {
     return ACP_OK;
   }
   if (ratio > mach_to_ratio(ACP_MACH_MAX) * (1.0 + 1e-14)) return ACP_ERR_RANGE;
-  /* M = c sqrt((qc/p + 1)(1 - 1/(7 M^2))^2.5): a contraction for M > 1. */
+  /* Newton's method on g(M) = ln K + 7 ln M - 2.5 ln(7 M^2 - 1) - ln(qc/p + 1),
+     g'(M) = 7/M - 35 M/(7 M^2 - 1) > 0 for M > 1, from the first fixed-point
+     iterate c sqrt(qc/p + 1): quadratic convergence; once a step is below
+     1e-9 M one more step reaches rounding. */
+  const double target = log1p(ratio);
   double m = RAYLEIGH_ITER * sqrt(ratio + 1.0);
-  for (int k = 0; k < 60; ++k) {
-    const double next = RAYLEIGH_ITER * sqrt((ratio + 1.0) * pow(1.0 - 1.0 / (7.0 * m * m), 2.5));
-    if (fabs(next - m) <= 1e-15 * next) {
-      *mach = fmin(next, ACP_MACH_MAX); /* ratios accepted within round-off above Mach 5 */
+  int close = 0;
+  for (int k = 0; k < 30; ++k) {
+    const double d = 7.0 * m * m - 1.0;
+    const double g = log(RAYLEIGH_K) + 7.0 * log(m) - 2.5 * log(d) - target;
+    const double step = g / (7.0 / m - 35.0 * m / d);
+    m -= step;
+    if (close) {
+      *mach = fmin(m, ACP_MACH_MAX); /* ratios accepted within round-off above Mach 5 */
       return ACP_OK;
     }
-    m = next;
+    close = fabs(step) <= 1e-9 * m;
   }
   return ACP_ERR_NO_CONVERGENCE;
 }

@@ -17,6 +17,8 @@
 typedef struct {
   size_t n;
   double *hp, *dtemp, *speed, *base, *expo, *o1, *o2, *o3, *o4;
+  acp_aircraft *ac; /* the invented demo regional jet */
+  double *mass, *tas; /* 30 to 39 t; 180 to 240 m/s TAS: a jet's cruise and climb */
 } arrays;
 
 /* Floors: the cheapest loops that any atmosphere or airspeed kernel must contain.
@@ -53,24 +55,72 @@ __attribute__((noinline)) static void k_tas_to_cas(const arrays *a) {
 __attribute__((noinline)) static void k_cas_to_mach(const arrays *a) { acp_cas_to_mach_n(a->n, a->speed, a->hp, a->o1); }
 __attribute__((noinline)) static void k_mach_to_cas(const arrays *a) { acp_mach_to_cas_n(a->n, a->expo, a->hp, a->o1); }
 
+/* Model kernels on the demo aircraft: per point (drag, speeds, SAR) or per call. */
+__attribute__((noinline)) static void k_drag(const arrays *a) {
+  acp_drag_n(a->ac, a->n, a->mass, a->hp, a->dtemp, a->tas, NULL, NULL, NULL, NULL, a->o1, NULL,
+             NULL, a->o2);
+}
+__attribute__((noinline)) static void k_speeds(const arrays *a) {
+  acp_speeds_n(a->ac, a->n, a->mass, a->hp, a->dtemp, a->o1, a->o2, a->o3, a->o4, NULL);
+}
+__attribute__((noinline)) static void k_sar(const arrays *a) {
+  acp_specific_air_range_n(a->ac, a->n, a->mass, a->hp, a->dtemp, a->tas, NULL, a->o1);
+}
+/* One climb, 1,500 ft to FL350, per "point" (n counts calls). */
+__attribute__((noinline)) static void k_climb(const arrays *a) {
+  for (size_t i = 0; i < a->n; ++i) {
+    acp_profile p;
+    acp_climb(a->ac, a->mass[i], 457.2, 10668.0, a->dtemp[i], 0.0, 0.0, &p);
+    a->o1[i] = p.fuel;
+  }
+}
+/* One 500 NM cruise at M0.78, FL350 per call. */
+__attribute__((noinline)) static void k_cruise(const arrays *a) {
+  for (size_t i = 0; i < a->n; ++i) {
+    acp_cruise_result r;
+    acp_cruise(a->ac, ACP_CRUISE_FIXED_MACH, 0.0, a->mass[i], 10668.0, a->dtemp[i], 0.0,
+               ACP_CRUISE_END_DISTANCE, 926000.0, 0.0, 0.0, &r);
+    a->o1[i] = r.fuel;
+  }
+}
+/* One 500 NM trip for a zero-fuel mass per call. */
+__attribute__((noinline)) static void k_trip(const arrays *a) {
+  acp_mission *m = acp_mission_new();
+  acp_mission_set(m, "distance", 926000.0);
+  acp_mission_set(m, "cruise_altitude", 10668.0);
+  for (size_t i = 0; i < a->n; ++i) {
+    acp_trip_result r;
+    acp_trip_for_zero_fuel_mass(a->ac, m, a->mass[i] - 5000.0, &r);
+    a->o1[i] = r.trip_fuel;
+  }
+  acp_mission_free(m);
+}
+
 typedef struct {
   const char *name;
   void (*run)(const arrays *);
+  size_t n_max; /* model kernels: at most this many points or calls per repetition */
 } kernel;
 
 static const kernel KERNELS[] = {
-    {"floor_copy", floor_copy},
-    {"floor_exp", floor_exp},
-    {"floor_pow", floor_pow},
-    {"floor_two_pow", floor_pow2},
-    {"floor_pow_libmvec", floor_pow_simd},
-    {"isa_n_four", k_isa},
-    {"isa_n_six", k_isa_all},
-    {"isa_pressure_altitude_n", k_pressure_altitude},
-    {"cas_to_tas_n", k_cas_to_tas},
-    {"tas_to_cas_n", k_tas_to_cas},
-    {"cas_to_mach_n", k_cas_to_mach},
-    {"mach_to_cas_n", k_mach_to_cas},
+    {"floor_copy", floor_copy, 0},
+    {"floor_exp", floor_exp, 0},
+    {"floor_pow", floor_pow, 0},
+    {"floor_two_pow", floor_pow2, 0},
+    {"floor_pow_libmvec", floor_pow_simd, 0},
+    {"isa_n_four", k_isa, 0},
+    {"isa_n_six", k_isa_all, 0},
+    {"isa_pressure_altitude_n", k_pressure_altitude, 0},
+    {"cas_to_tas_n", k_cas_to_tas, 0},
+    {"tas_to_cas_n", k_tas_to_cas, 0},
+    {"cas_to_mach_n", k_cas_to_mach, 0},
+    {"mach_to_cas_n", k_mach_to_cas, 0},
+    {"drag_n", k_drag, 20000},
+    {"speeds_n", k_speeds, 200},
+    {"specific_air_range_n", k_sar, 20000},
+    {"climb_1500ft_to_FL350", k_climb, 50},
+    {"cruise_500NM", k_cruise, 20},
+    {"trip_500NM", k_trip, 5},
 };
 
 static double now_ns(void) {
@@ -100,7 +150,13 @@ int main(int argc, char **argv) {
   const int reps = once ? 1 : argc > 2 ? atoi(argv[2]) : 31;
   if (n == 0 || reps < 1) return 2;
   arrays a = {n, alloc(n), alloc(n), alloc(n), alloc(n), alloc(n),
-              alloc(n), alloc(n), alloc(n), alloc(n)};
+              alloc(n), alloc(n), alloc(n), alloc(n), acp_aircraft_new(), alloc(n), alloc(n)};
+  char err[256];
+  if (!a.ac || acp_aircraft_load(a.ac, ACP_EXAMPLES_DIR "/aircraft/regional_jet.toml", err,
+                                 sizeof err) != ACP_OK) {
+    fprintf(stderr, "demo aircraft: %s\n", err);
+    return 1;
+  }
   /* Pseudo-random flight conditions (fixed LCG seed): sea level to FL450,
      ISA -20..+20, 60..130 m/s (117..253 kt) CAS, subsonic everywhere; pow inputs of the atmosphere's magnitude. */
   unsigned long long s = 12345u;
@@ -112,11 +168,14 @@ int main(int argc, char **argv) {
     a.speed[i] = 60.0 + 70.0 * fmod(u * 13.0, 1.0);
     a.base[i] = 15000.0 + 90000.0 * fmod(u * 3.0, 1.0);
     a.expo[i] = 0.2 + 0.7 * fmod(u * 5.0, 1.0);
+    a.mass[i] = 30000.0 + 9000.0 * fmod(u * 11.0, 1.0);
+    a.tas[i] = 180.0 + 60.0 * fmod(u * 17.0, 1.0);
   }
   const size_t nk = sizeof KERNELS / sizeof KERNELS[0];
   if (once) {
     for (size_t k = 0; k < nk; ++k)
       if (strcmp(KERNELS[k].name, argv[2]) == 0) {
+        if (KERNELS[k].n_max && a.n > KERNELS[k].n_max) a.n = KERNELS[k].n_max;
         KERNELS[k].run(&a);
         return 0;
       }
@@ -127,20 +186,22 @@ int main(int argc, char **argv) {
   double floor_pow_ns = NAN;
   printf("kernel,n,median_ns_per_element,min_ns,max_ns,ratio_to_pow_floor\n");
   for (size_t k = 0; k < nk; ++k) {
+    a.n = KERNELS[k].n_max && n > KERNELS[k].n_max ? KERNELS[k].n_max : n;
     KERNELS[k].run(&a); /* warm-up */
     for (int r = 0; r < reps; ++r) {
       const double t0 = now_ns();
       KERNELS[k].run(&a);
-      t[r] = (now_ns() - t0) / (double)n;
+      t[r] = (now_ns() - t0) / (double)a.n;
     }
     qsort(t, (size_t)reps, sizeof t[0], cmp);
     const double med = t[reps / 2];
     if (strcmp(KERNELS[k].name, "floor_pow") == 0) floor_pow_ns = med;
-    printf("%s,%zu,%.3f,%.3f,%.3f,%.3f\n", KERNELS[k].name, n, med, t[0], t[reps - 1],
+    printf("%s,%zu,%.3f,%.3f,%.3f,%.3f\n", KERNELS[k].name, a.n, med, t[0], t[reps - 1],
            med / floor_pow_ns);
   }
   free(t);
-  double *all[] = {a.hp, a.dtemp, a.speed, a.base, a.expo, a.o1, a.o2, a.o3, a.o4};
+  acp_aircraft_free(a.ac);
+  double *all[] = {a.hp, a.dtemp, a.speed, a.base, a.expo, a.o1, a.o2, a.o3, a.o4, a.mass, a.tas};
   for (size_t i = 0; i < sizeof all / sizeof all[0]; ++i) free(all[i]);
   return 0;
 }

@@ -62,10 +62,10 @@ ACP_API double acp_impact_pressure(double mach, double hp);
 /**
  * Mach from the impact-to-static pressure ratio qc/p, 0 to the value at Mach 5.
  * Below qc/p = 0.892929 (Mach 1) the isentropic relation is inverted in closed
- * form; above it the Rayleigh pitot formula is solved by the fixed-point
- * iteration M = 0.881285 sqrt((qc/p + 1)(1 - 1/(7 M^2))^2.5), which contracts
- * for M > 1 and is run until two iterates agree to 1e-15 relative (at most
- * 60 steps; ACP_ERR_NO_CONVERGENCE otherwise).
+ * form; above it the logarithm of the Rayleigh pitot formula is solved by
+ * Newton's method from M0 = 0.881285 sqrt(qc/p + 1) (the first iterate of the
+ * classic fixed-point form), one step past a step below 1e-9 M: at most 5
+ * steps from Mach 1 to 5 (at most 30; ACP_ERR_NO_CONVERGENCE otherwise).
  *
  * @param ratio qc/p, >= 0
  * @param mach  out: Mach number; NaN on error
