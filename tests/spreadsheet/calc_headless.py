@@ -119,6 +119,12 @@ def evaluate_book(book):
         v = sheets[s].get((r, c))
         if isinstance(v, fods.Formula):
             return formula(s, r, c, v)[0][0]
+        if v is None:   # a cell inside an array formula's result: its element
+            for (r0, c0), f in sheets[s].items():
+                if isinstance(f, fods.Formula) and r0 <= r < r0 + f.rows and c0 <= c < c0 + f.cols:
+                    rows = formula(s, r0, c0, f)
+                    return rows[r - r0][c - c0] if r - r0 < len(rows) and \
+                        c - c0 < len(rows[r - r0]) else None
         return v
 
     def formula(s, r, c, f):
