@@ -53,7 +53,14 @@ __attribute__((noinline)) static void k_tas_to_cas(const arrays *a) {
   acp_tas_to_cas_n(a->n, a->speed, a->hp, a->dtemp, a->o1);
 }
 __attribute__((noinline)) static void k_cas_to_mach(const arrays *a) { acp_cas_to_mach_n(a->n, a->speed, a->hp, a->o1); }
-__attribute__((noinline)) static void k_mach_to_cas(const arrays *a) { acp_mach_to_cas_n(a->n, a->expo, a->hp, a->o1); }
+__attribute__((noinline)) /* The scalar function in a loop: the C cost a scalar call from Python pays too. */
+__attribute__((noinline)) static void k_cas_to_mach_scalar(const arrays *a) {
+  for (size_t i = 0; i < a->n; ++i) a->o1[i] = acp_cas_to_mach(a->speed[i], a->hp[i]);
+}
+__attribute__((noinline)) static void k_ft_to_m_scalar(const arrays *a) {
+  for (size_t i = 0; i < a->n; ++i) a->o1[i] = acp_ft_to_m(a->hp[i]);
+}
+static void k_mach_to_cas(const arrays *a) { acp_mach_to_cas_n(a->n, a->expo, a->hp, a->o1); }
 
 /* Model kernels on the demo aircraft: per point (drag, speeds, SAR) or per call. */
 __attribute__((noinline)) static void k_drag(const arrays *a) {
@@ -115,6 +122,8 @@ static const kernel KERNELS[] = {
     {"tas_to_cas_n", k_tas_to_cas, 0},
     {"cas_to_mach_n", k_cas_to_mach, 0},
     {"mach_to_cas_n", k_mach_to_cas, 0},
+    {"cas_to_mach (scalar loop)", k_cas_to_mach_scalar, 0},
+    {"ft_to_m (scalar loop)", k_ft_to_m_scalar, 0},
     {"drag_n", k_drag, 20000},
     {"speeds_n", k_speeds, 200},
     {"specific_air_range_n", k_sar, 20000},
