@@ -57,6 +57,16 @@ __attribute__((noinline)) /* The scalar function in a loop: the C cost a scalar 
 __attribute__((noinline)) static void k_cas_to_mach_scalar(const arrays *a) {
   for (size_t i = 0; i < a->n; ++i) a->o1[i] = acp_cas_to_mach(a->speed[i], a->hp[i]);
 }
+__attribute__((noinline)) static void k_cas_to_tas_scalar(const arrays *a) {
+  for (size_t i = 0; i < a->n; ++i) a->o1[i] = acp_cas_to_tas(a->speed[i], a->hp[i], a->dtemp[i]);
+}
+__attribute__((noinline)) static void k_isa_scalar(const arrays *a) {
+  for (size_t i = 0; i < a->n; ++i) {
+    acp_atmos s;
+    acp_isa(a->hp[i], a->dtemp[i], &s);
+    a->o1[i] = s.density;
+  }
+}
 __attribute__((noinline)) static void k_ft_to_m_scalar(const arrays *a) {
   for (size_t i = 0; i < a->n; ++i) a->o1[i] = acp_ft_to_m(a->hp[i]);
 }
@@ -123,6 +133,8 @@ static const kernel KERNELS[] = {
     {"cas_to_mach_n", k_cas_to_mach, 0},
     {"mach_to_cas_n", k_mach_to_cas, 0},
     {"cas_to_mach (scalar loop)", k_cas_to_mach_scalar, 0},
+    {"cas_to_tas (scalar loop)", k_cas_to_tas_scalar, 0},
+    {"isa (scalar loop)", k_isa_scalar, 0},
     {"ft_to_m (scalar loop)", k_ft_to_m_scalar, 0},
     {"drag_n", k_drag, 20000},
     {"speeds_n", k_speeds, 200},

@@ -4,17 +4,22 @@
 Not a test: it prints figures. Run from the top of the repository after a build:
 
     PYTHONPATH=build-py/bindings/python /usr/bin/python3 tests/bench/bench_python.py \
-        build-py/libperf/libacperf.so
+        build-py/libperf/libacperf.so [build-py/tests/bench/acperf_bench]
 
 1. Array calls, 1e6 points: acperf.<fn>(arrays) against the `_n` C function on
    the same arrays through ctypes (output arrays allocated in both), best of N
    runs, alternated so that both see the same machine load.
-2. Scalar calls: time per call of acperf.<fn>(floats), of the raw SWIG function
-   acperf.capi.acp_<fn> and of ctypes, and the C time per point measured by the
-   array form; overhead = time per call - C time per point.
+2. Scalar calls: time per call of acperf.<fn>(floats) (the fast path of
+   acperf._fast), of the Python function behind it (`__wrapped__`: its SWIG
+   scalar path, the public path before acperf._fast), of the raw SWIG function
+   acperf.capi.acp_<fn> and of ctypes; overhead = time per call - C time per
+   call, measured in this run by acperf._fast.c_loop (the C function in a C
+   loop with the same inputs); the scalar loops of the C benchmark
+   (acperf_bench, optional second argument, varied inputs) are shown beside.
 """
 
 import ctypes
+import math
 import sys
 import time
 import timeit
@@ -92,13 +97,23 @@ def per_call(stmt, glb, number=200_000):
     return t / number
 
 
-def scalar_bench():
-    print("Scalar calls, best of 7 x 200,000 calls:")
-    # C time per point, from the array form on 1e6 identical points.
-    cas = np.full(N, 150.0)
-    hp = np.full(N, 3000.0)
-    cfn = declare("acp_cas_to_mach_n", 2, 1)
-    t_c = best(lambda: c_array_call(cfn, [cas, hp], 1)) / N
+def c_scalar_loops(bench_exe):
+    """{kernel: (median, min) ns per call} of the scalar loops of tests/bench/bench.c
+    (acperf_bench 200000 11), run now so that C and Python see the same machine."""
+    import subprocess
+
+    out = subprocess.run([bench_exe, "200000", "11"], check=True, capture_output=True,
+                         text=True).stdout
+    loops = {}
+    for line in out.splitlines()[1:]:
+        name, _, median, low = line.split(",")[:4]
+        if name.endswith("(scalar loop)"):
+            loops[name.split()[0]] = (float(median) * 1e-9, float(low) * 1e-9)
+    return loops
+
+
+def scalar_bench(bench_exe):
+    print("Scalar calls, best of 9 x 200,000 calls:")
     ct = lib.acp_cas_to_mach
     ct.restype, ct.argtypes = D, [D, D]
     ft = lib.acp_ft_to_m
@@ -107,23 +122,60 @@ def scalar_bench():
     def empty(a, b):
         return a
 
-    g = {"acperf": acperf, "cas_to_mach": acperf.cas_to_mach, "raw": acperf.capi.acp_cas_to_mach,
-         "ct": ct, "ft_to_m": acperf.units.ft_to_m, "raw_ft": acperf.capi.acp_ft_to_m,
-         "ct_ft": ft, "empty": empty}
-    rows = [
-        ("acperf.cas_to_mach(150.0, 3000.0)", "cas_to_mach(150.0, 3000.0)", t_c),
-        ("acperf.capi.acp_cas_to_mach (raw SWIG)", "raw(150.0, 3000.0)", t_c),
-        ("ctypes acp_cas_to_mach", "ct(150.0, 3000.0)", t_c),
-        ("acperf.units.ft_to_m(1000.0)", "ft_to_m(1000.0)", 0.0),
-        ("acperf.capi.acp_ft_to_m (raw SWIG)", "raw_ft(1000.0)", 0.0),
-        ("ctypes acp_ft_to_m", "ct_ft(1000.0)", 0.0),
-        ("empty Python function (reference)", "empty(150.0, 3000.0)", 0.0),
+    loops = c_scalar_loops(bench_exe) if bench_exe else {}
+    for name, (med, low) in loops.items():
+        print(f"  C scalar loop {name:12s} median {med * 1e9:6.1f} ns   min {low * 1e9:6.1f} ns"
+              "   (acperf_bench: varied inputs)")
+    # Overhead: each Python statement against the same C call with the same inputs
+    # looped in C by acperf._fast.c_loop (the fast path's trampoline, no Python in
+    # the loop), alternated 9 times so that both see the same machine load; minima.
+    # "chained": the C loop with each call waiting for the previous result, as a
+    # call from Python does (a free-running loop overlaps successive calls).
+    g = {"acperf": acperf, "ct": ct, "ct_ft": ft, "empty": empty,
+         "cas_to_mach": acperf.cas_to_mach, "cas_to_mach_py": acperf.cas_to_mach.__wrapped__,
+         "raw": acperf.capi.acp_cas_to_mach,
+         "cas_to_tas": acperf.cas_to_tas, "cas_to_tas_py": acperf.cas_to_tas.__wrapped__,
+         "raw_tas": acperf.capi.acp_cas_to_tas,
+         "isa": acperf.isa, "isa_py": acperf.isa.__wrapped__, "raw_isa": acperf.capi.acp_isa,
+         "ft_to_m": acperf.units.ft_to_m, "ft_to_m_py": acperf.units.ft_to_m.__wrapped__,
+         "raw_ft": acperf.capi.acp_ft_to_m}
+    groups = [
+        ("acp_cas_to_mach", (150.0, 3000.0), [
+            ("acperf.cas_to_mach(150.0, 3000.0) [fast]", "cas_to_mach(150.0, 3000.0)"),
+            ("  Python function behind it (before)", "cas_to_mach_py(150.0, 3000.0)"),
+            ("  acperf.capi.acp_cas_to_mach (raw SWIG)", "raw(150.0, 3000.0)"),
+            ("  ctypes acp_cas_to_mach", "ct(150.0, 3000.0)")]),
+        ("acp_cas_to_tas", (150.0, 3000.0, 10.0), [
+            ("acperf.cas_to_tas(150.0, 3000.0, 10.0) [fast]", "cas_to_tas(150.0, 3000.0, 10.0)"),
+            ("  Python function behind it (before)", "cas_to_tas_py(150.0, 3000.0, 10.0)"),
+            ("  acperf.capi.acp_cas_to_tas (raw SWIG)", "raw_tas(150.0, 3000.0, 10.0)")]),
+        ("acp_isa", (11000.0, 10.0), [
+            ("acperf.isa(11000.0, 10.0) [fast, Atmos]", "isa(11000.0, 10.0)"),
+            ("  Python function behind it (before)", "isa_py(11000.0, 10.0)"),
+            ("  acperf.capi.acp_isa (raw SWIG, struct)", "raw_isa(11000.0, 10.0)")]),
+        ("acp_ft_to_m", (1000.0,), [
+            ("acperf.units.ft_to_m(1000.0) [fast]", "ft_to_m(1000.0)"),
+            ("  Python function behind it (before)", "ft_to_m_py(1000.0)"),
+            ("  acperf.capi.acp_ft_to_m (raw SWIG)", "raw_ft(1000.0)"),
+            ("  ctypes acp_ft_to_m", "ct_ft(1000.0)")]),
     ]
-    print(f"  C time per point of acp_cas_to_mach (from the array form): {t_c * 1e9:.1f} ns")
-    for label, stmt, c_cost in rows:
-        t = per_call(stmt, g)
-        extra = f"   overhead {(t - c_cost) * 1e9:6.1f} ns" if c_cost else ""
-        print(f"  {label:42s} {t * 1e9:7.1f} ns/call{extra}")
+    n = 200_000
+    print("  overhead = time per call - C time per call, same inputs, same run (minima)")
+    for cname, args, rows in groups:
+        t_c = t_chain = math.inf
+        t_py = [math.inf] * len(rows)
+        for _ in range(9):
+            t_c = min(t_c, acperf._fast.c_loop(cname, args, n) / n)
+            t_chain = min(t_chain, acperf._fast.c_loop(cname, args, n, True) / n)
+            for i, (_, stmt) in enumerate(rows):
+                t_py[i] = min(t_py[i], timeit.timeit(stmt, globals=g, number=n) / n)
+        print(f"  C {cname}{args} in a C loop {' ' * max(0, 26 - len(cname) - len(str(args)))}"
+              f"{t_c * 1e9:7.1f} ns/call; chained {t_chain * 1e9:6.1f} ns/call")
+        for (label, _), t in zip(rows, t_py):
+            print(f"  {label:48s} {t * 1e9:7.1f} ns/call   overhead {(t - t_c) * 1e9:6.1f} ns"
+                  f" (chained {(t - t_chain) * 1e9:6.1f})")
+    t = per_call("empty(150.0, 3000.0)", g)
+    print(f"  {'empty Python function (reference)':48s} {t * 1e9:7.1f} ns/call")
 
 
 # What a notebook user would otherwise write: the ISO 2533 troposphere and lower
@@ -170,5 +222,5 @@ def alternatives_bench():
 if __name__ == "__main__":
     print(f"acperf {acperf.__version__}, numpy {np.__version__}, Python {sys.version.split()[0]}")
     array_bench()
-    scalar_bench()
+    scalar_bench(sys.argv[2] if len(sys.argv) > 2 else None)
     alternatives_bench()

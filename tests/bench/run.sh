@@ -24,5 +24,5 @@ out=build-bench
 cat "$out/results.md"
 if [ "$python" = ON ]; then
   PYTHONPATH=build-bench/bindings/python /usr/bin/python3 tests/bench/bench_python.py \
-    build-bench/libperf/libacperf.so | tee "$out/python.txt"
+    build-bench/libperf/libacperf.so build-bench/tests/bench/acperf_bench | tee "$out/python.txt"
 fi

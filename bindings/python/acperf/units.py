@@ -20,7 +20,7 @@ import operator
 import numpy as np
 
 from . import capi as _c
-from ._core import AcperfError, AcperfWarning, _as_float_array, _series_index
+from ._core import AcperfError, AcperfWarning, _as_float_array, _series_index, fast_path
 
 FT = _c.ACP_FT
 NM = _c.ACP_NM
@@ -85,7 +85,7 @@ def _make_linear(name, cname, op, const):
                        f"Series (the same single operation by {const!r}).\n\n"
                        + (scalar.__doc__ or ""))
     convert.c_function = cname
-    return convert
+    return fast_path(convert, cname, 1)
 
 
 for _name, (_cname, _op, _const) in _LINEAR.items():

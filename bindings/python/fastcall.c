@@ -1,0 +1,386 @@
+/*
+ * acperf._fast: the scalar fast path of the Pythonic functions.
+ *
+ * A `acperf._fast.function` is a callable C object that stands for one public
+ * function of the package (acperf.cas_to_mach, ...). Called with positional
+ * Python floats or ints only (what SWIG's double typemap accepts: float, int
+ * and their subclasses such as numpy.float64 and bool), it converts them, calls
+ * the C function through a one-line trampoline (generated from the headers by
+ * gen_fastcall.py into fastcall_table.h) and returns a float or the named result
+ * of the Python layer. Any other call (keywords, arrays, lists, Series, numpy
+ * integer scalars, wrong argument counts, ints too large for a double) goes,
+ * unchanged, to the Python function it was made from (`__wrapped__`), which has
+ * the array path and the argument errors. No Python frame runs on the fast path.
+ *
+ * A failed call raises acperf.AcperfError with the message and `status` the
+ * SWIG layer gives (errors.i: "<C name><arguments>: <status text>"; the
+ * arguments as SWIG saw them, so the defaults filled in by the Python layer are
+ * shown too). Nothing here computes: physics lives in libacperf.
+ */
+#define PY_SSIZE_T_CLEAN
+#include <Python.h>
+#include <structmember.h>
+#include <math.h>
+#include <stddef.h>
+#include <time.h>
+
+#include "acperf.h"
+
+enum { ACPF_PLAIN, ACPF_NAN, ACPF_STATUS };
+#define ACPF_MAX_IN 16
+#define ACPF_MAX_OUT 16
+
+typedef struct {
+  const char *name;                         /* C name, as SWIG shows it in errors */
+  int nin, nout, kind;                      /* kind: ACPF_PLAIN, ACPF_NAN, ACPF_STATUS */
+  int (*call)(const double *in, double *out); /* status (0 for double functions) */
+  const char *const *outputs;               /* output names (out-pointers, struct fields) */
+} acpf_entry;
+
+#include "fastcall_table.h"
+
+static PyObject *acpf_error = NULL; /* acperf.AcperfError, given by _core.py */
+
+typedef struct {
+  PyObject_HEAD
+  const acpf_entry *entry;
+  PyObject *fallback;  /* the Python function: anything not all-scalar goes there */
+  PyObject *defaults;  /* tuple of the default objects of the trailing parameters */
+  PyObject *result;    /* named result type (a tuple subtype) or NULL: one float */
+  int nmin;            /* arguments without a default */
+  PyObject *dict;
+  vectorcallfunc vectorcall;
+} acpf_function;
+
+/* errors.i's acpy_raise_call: "<function><arguments>: <status text>"; one argument
+   shows as "(x)" (SWIG's METH_O), several as the tuple's repr. */
+static void acpf_raise(const acpf_function *f, PyObject *const *args, Py_ssize_t nargs,
+                       int status) {
+  const acpf_entry *e = f->entry;
+  char text[96];
+  if (status < 0)
+    PyOS_snprintf(text, sizeof text, "%s, or %s (no result)", acp_strerror(ACP_ERR_INVALID),
+                  acp_strerror(ACP_ERR_RANGE));
+  else
+    PyOS_snprintf(text, sizeof text, "%s", acp_strerror(status));
+  PyObject *shown;
+  if (e->nin == 1) {
+    shown = PyUnicode_FromFormat("(%R)", args[0]);
+  } else {
+    PyObject *all = PyTuple_New(e->nin);
+    if (!all) return;
+    for (Py_ssize_t i = 0; i < e->nin; i++) {
+      PyObject *v = i < nargs ? args[i] : PyTuple_GET_ITEM(f->defaults, i - f->nmin);
+      Py_INCREF(v);
+      PyTuple_SET_ITEM(all, i, v);
+    }
+    shown = PyObject_Repr(all);
+    Py_DECREF(all);
+  }
+  if (!shown) return;
+  PyObject *message = PyUnicode_FromFormat("%s%U: %s", e->name, shown, text);
+  Py_DECREF(shown);
+  if (!message) return;
+  PyObject *exc = PyObject_CallOneArg(acpf_error, message);
+  Py_DECREF(message);
+  if (!exc) return;
+  PyObject *code = status < 0 ? Py_NewRef(Py_None) : PyLong_FromLong(status);
+  if (code && PyObject_SetAttrString(exc, "status", code) == 0)
+    PyErr_SetObject(acpf_error, exc);
+  Py_XDECREF(code);
+  Py_DECREF(exc);
+}
+
+/* A Python float or int (or subclass) as a double, as SWIG_AsVal_double takes it;
+   0 when the value is something else (the caller falls back). */
+static inline int acpf_double(PyObject *o, double *v) {
+  if (PyFloat_Check(o)) {
+    *v = PyFloat_AS_DOUBLE(o);
+    return 1;
+  }
+  if (PyLong_Check(o)) {
+    *v = PyLong_AsDouble(o);
+    if (*v == -1.0 && PyErr_Occurred()) {
+      PyErr_Clear();
+      return 0;
+    }
+    return 1;
+  }
+  return 0;
+}
+
+static PyObject *acpf_call(PyObject *self, PyObject *const *args, size_t nargsf,
+                           PyObject *kwnames) {
+  acpf_function *f = (acpf_function *)self;
+  const acpf_entry *e = f->entry;
+  const Py_ssize_t nargs = PyVectorcall_NARGS(nargsf);
+  double in[ACPF_MAX_IN], out[ACPF_MAX_OUT];
+  if (kwnames || nargs < f->nmin || nargs > e->nin) goto fallback;
+  for (Py_ssize_t i = 0; i < nargs; i++)
+    if (!acpf_double(args[i], &in[i])) goto fallback;
+  for (Py_ssize_t i = nargs; i < e->nin; i++)
+    in[i] = PyFloat_AS_DOUBLE(PyTuple_GET_ITEM(f->defaults, i - f->nmin));
+
+  const int status = e->call(in, out);
+  if (status != 0 || (e->kind == ACPF_NAN && isnan(out[0]))) {
+    acpf_raise(f, args, nargs, e->kind == ACPF_NAN ? -1 : status);
+    return NULL;
+  }
+  if (!f->result) return PyFloat_FromDouble(out[0]);
+  /* the named result: a tuple subtype without extra slots, filled in place */
+  PyTypeObject *type = (PyTypeObject *)f->result;
+  PyObject *r = type->tp_alloc(type, e->nout);
+  if (!r) return NULL;
+  for (int i = 0; i < e->nout; i++) {
+    PyObject *v = PyFloat_FromDouble(out[i]);
+    if (!v) {
+      Py_DECREF(r);
+      return NULL;
+    }
+    PyTuple_SET_ITEM(r, i, v);
+  }
+  return r;
+
+fallback:
+  return PyObject_Vectorcall(f->fallback, args, nargsf, kwnames);
+}
+
+/* function(c_name, nparams, fallback, defaults, result): see _core.py. */
+static PyObject *acpf_new(PyTypeObject *type, PyObject *args, PyObject *kwds) {
+  const char *name;
+  int nparams;
+  PyObject *fallback, *defaults, *result;
+  if (kwds && PyDict_GET_SIZE(kwds)) {
+    PyErr_SetString(PyExc_TypeError, "function() takes positional arguments only");
+    return NULL;
+  }
+  if (!PyArg_ParseTuple(args, "siOO!O:function", &name, &nparams, &fallback, &PyTuple_Type,
+                        &defaults, &result))
+    return NULL;
+  const acpf_entry *e = acpf_table;
+  while (e->name && strcmp(e->name, name) != 0) e++;
+  if (!e->name) return PyErr_Format(PyExc_LookupError, "%s has no fast path", name);
+  if (nparams != e->nin)
+    return PyErr_Format(PyExc_ValueError, "%s: %d parameters where the C function has %d inputs",
+                        name, nparams, e->nin);
+  if (!acpf_error) return PyErr_Format(PyExc_RuntimeError, "call set_error() first");
+  if (!PyCallable_Check(fallback)) return PyErr_Format(PyExc_TypeError, "fallback not callable");
+  const Py_ssize_t ndef = PyTuple_GET_SIZE(defaults);
+  if (ndef > e->nin) return PyErr_Format(PyExc_ValueError, "%s: too many defaults", name);
+  for (Py_ssize_t i = 0; i < ndef; i++)
+    if (!PyFloat_CheckExact(PyTuple_GET_ITEM(defaults, i)))
+      return PyErr_Format(PyExc_TypeError, "%s: defaults must be floats", name);
+  if (result == Py_None) {
+    if (e->nout != 1) return PyErr_Format(PyExc_ValueError, "%s: several outputs need a result type", name);
+    result = NULL;
+  } else {
+    PyTypeObject *t = (PyTypeObject *)result;
+    if (!PyType_Check(result) || !PyType_IsSubtype(t, &PyTuple_Type) ||
+        t->tp_basicsize != PyTuple_Type.tp_basicsize || t->tp_dictoffset != 0 ||
+        t->tp_itemsize != PyTuple_Type.tp_itemsize)
+      return PyErr_Format(PyExc_TypeError, "%s: the result type must be a tuple subtype "
+                          "without slots (a namedtuple)", name);
+  }
+  if (e->nin > ACPF_MAX_IN || e->nout > ACPF_MAX_OUT)
+    return PyErr_Format(PyExc_ValueError, "%s: too many arguments for the fast path", name);
+  acpf_function *f = (acpf_function *)type->tp_alloc(type, 0);
+  if (!f) return NULL;
+  f->entry = e;
+  f->fallback = Py_NewRef(fallback);
+  f->defaults = Py_NewRef(defaults);
+  f->result = Py_XNewRef(result);
+  f->nmin = e->nin - (int)ndef;
+  f->vectorcall = acpf_call;
+  return (PyObject *)f;
+}
+
+static int acpf_traverse(acpf_function *f, visitproc visit, void *arg) {
+  Py_VISIT(f->fallback);
+  Py_VISIT(f->defaults);
+  Py_VISIT(f->result);
+  Py_VISIT(f->dict);
+  return 0;
+}
+
+static int acpf_clear(acpf_function *f) {
+  Py_CLEAR(f->fallback);
+  Py_CLEAR(f->defaults);
+  Py_CLEAR(f->result);
+  Py_CLEAR(f->dict);
+  return 0;
+}
+
+static void acpf_dealloc(acpf_function *f) {
+  PyObject_GC_UnTrack(f);
+  acpf_clear(f);
+  Py_TYPE(f)->tp_free((PyObject *)f);
+}
+
+/* Like a Python function: bound to an instance when it is a class attribute. */
+static PyObject *acpf_get(PyObject *self, PyObject *obj, PyObject *type) {
+  (void)type;
+  if (obj == NULL || obj == Py_None) return Py_NewRef(self);
+  return PyMethod_New(self, obj);
+}
+
+static PyObject *acpf_repr(acpf_function *f) {
+  return PyUnicode_FromFormat("<function %s (libacperf %s, fast scalar path)>",
+                              f->entry->name + 4, f->entry->name);
+}
+
+/* Pickled by name, as functions are: `__module__` and `__qualname__` (set by _core.py). */
+static PyObject *acpf_reduce(PyObject *self, PyObject *unused) {
+  (void)unused;
+  return PyObject_GetAttrString(self, "__qualname__");
+}
+
+static PyObject *acpf_get_c_outputs(acpf_function *f, void *unused) {
+  (void)unused;
+  PyObject *t = PyTuple_New(f->entry->nout);
+  if (!t) return NULL;
+  for (int i = 0; i < f->entry->nout; i++) {
+    PyObject *s = PyUnicode_FromString(f->entry->outputs[i]);
+    if (!s) {
+      Py_DECREF(t);
+      return NULL;
+    }
+    PyTuple_SET_ITEM(t, i, s);
+  }
+  return t;
+}
+
+static PyMethodDef acpf_methods[] = {
+    {"__reduce__", acpf_reduce, METH_NOARGS, NULL},
+    {NULL, NULL, 0, NULL},
+};
+
+static PyGetSetDef acpf_getset[] = {
+    {"__dict__", PyObject_GenericGetDict, PyObject_GenericSetDict, NULL, NULL},
+    {"fast_outputs", (getter)acpf_get_c_outputs, NULL,
+     "Output names of the C function on the fast path (out-pointers or struct fields).", NULL},
+    {NULL, NULL, NULL, NULL, NULL},
+};
+
+static PyMemberDef acpf_members[] = {
+    {"__wrapped__", T_OBJECT, offsetof(acpf_function, fallback), READONLY,
+     "The Python function: the array path and every call that is not all-scalar."},
+    {NULL, 0, 0, 0, NULL},
+};
+
+static PyTypeObject acpf_function_type = {
+    PyVarObject_HEAD_INIT(NULL, 0)
+    .tp_name = "acperf._fast.function",
+    .tp_doc = "A public acperf function with a fast path for scalar calls (see fastcall.c).",
+    .tp_basicsize = sizeof(acpf_function),
+    .tp_flags = Py_TPFLAGS_DEFAULT | Py_TPFLAGS_HAVE_GC | Py_TPFLAGS_HAVE_VECTORCALL,
+    .tp_new = acpf_new,
+    .tp_dealloc = (destructor)acpf_dealloc,
+    .tp_traverse = (traverseproc)acpf_traverse,
+    .tp_clear = (inquiry)acpf_clear,
+    .tp_call = PyVectorcall_Call,
+    .tp_vectorcall_offset = offsetof(acpf_function, vectorcall),
+    .tp_dictoffset = offsetof(acpf_function, dict),
+    .tp_descr_get = acpf_get,
+    .tp_repr = (reprfunc)acpf_repr,
+    .tp_methods = acpf_methods,
+    .tp_getset = acpf_getset,
+    .tp_members = acpf_members,
+};
+
+/* set_error(AcperfError): the exception class of the SWIG layer. */
+static PyObject *acpf_set_error(PyObject *module, PyObject *cls) {
+  (void)module;
+  if (!PyType_Check(cls) || !PyType_IsSubtype((PyTypeObject *)cls,
+                                              (PyTypeObject *)PyExc_ValueError)) {
+    PyErr_SetString(PyExc_TypeError, "set_error: expected acperf.AcperfError");
+    return NULL;
+  }
+  Py_XSETREF(acpf_error, Py_NewRef(cls));
+  Py_RETURN_NONE;
+}
+
+static PyObject *acpf_names(PyObject *module, PyObject *unused) {
+  (void)module;
+  (void)unused;
+  PyObject *names = PyList_New(0);
+  if (!names) return NULL;
+  for (const acpf_entry *e = acpf_table; e->name; e++) {
+    PyObject *s = PyUnicode_FromString(e->name);
+    if (!s || PyList_Append(names, s) < 0) {
+      Py_XDECREF(s);
+      Py_DECREF(names);
+      return NULL;
+    }
+    Py_DECREF(s);
+  }
+  return names;
+}
+
+/* c_loop(c_name, args, n, chained=False): seconds for n calls of the C function
+   through its trampoline with these inputs, no Python in the loop: the C cost
+   that a scalar call from Python pays too (tests/bench/bench_python.py).
+   chained: each call's first input waits for the previous result (+ 0.0 times
+   it), so the calls cannot overlap in the CPU, as calls from Python do not. */
+static PyObject *acpf_c_loop(PyObject *module, PyObject *args) {
+  (void)module;
+  const char *name;
+  PyObject *values;
+  long long n;
+  int chained = 0;
+  if (!PyArg_ParseTuple(args, "sO!L|p:c_loop", &name, &PyTuple_Type, &values, &n, &chained))
+    return NULL;
+  const acpf_entry *e = acpf_table;
+  while (e->name && strcmp(e->name, name) != 0) e++;
+  if (!e->name) return PyErr_Format(PyExc_LookupError, "%s has no fast path", name);
+  if (PyTuple_GET_SIZE(values) != e->nin || n < 1)
+    return PyErr_Format(PyExc_ValueError, "%s: %d inputs and n >= 1 expected", name, e->nin);
+  double in[ACPF_MAX_IN], out[ACPF_MAX_OUT];
+  for (int i = 0; i < e->nin; i++) {
+    in[i] = PyFloat_AsDouble(PyTuple_GET_ITEM(values, i));
+    if (in[i] == -1.0 && PyErr_Occurred()) return NULL;
+  }
+  volatile double sink = 0.0;
+  struct timespec t0, t1;
+  clock_gettime(CLOCK_MONOTONIC, &t0);
+  const double first = in[0];
+  if (chained) {
+    for (long long k = 0; k < n; k++) {
+      e->call(in, out);
+      in[0] = first + out[0] * 0.0; /* the same value, after the result */
+    }
+  } else {
+    for (long long k = 0; k < n; k++) {
+      e->call(in, out);
+      sink += out[0];
+    }
+  }
+  clock_gettime(CLOCK_MONOTONIC, &t1);
+  (void)sink;
+  return PyFloat_FromDouble((double)(t1.tv_sec - t0.tv_sec) + 1e-9 * (double)(t1.tv_nsec - t0.tv_nsec));
+}
+
+static PyMethodDef module_methods[] = {
+    {"c_loop", acpf_c_loop, METH_VARARGS,
+     "c_loop(c_name, args, n, chained=False): seconds for n C calls with these inputs\n"
+     "(benchmarks; chained: each call waits for the previous result)."},
+    {"set_error", acpf_set_error, METH_O, "Set the exception class raised on failures."},
+    {"names", acpf_names, METH_NOARGS, "C names of the functions that have a fast path."},
+    {NULL, NULL, 0, NULL},
+};
+
+static struct PyModuleDef module_def = {
+    PyModuleDef_HEAD_INIT, "acperf._fast",
+    "Fast scalar calls of the acperf functions whose inputs are all doubles (fastcall.c).",
+    -1, module_methods, NULL, NULL, NULL, NULL,
+};
+
+PyMODINIT_FUNC PyInit__fast(void) {
+  if (PyType_Ready(&acpf_function_type) < 0) return NULL;
+  PyObject *m = PyModule_Create(&module_def);
+  if (!m) return NULL;
+  if (PyModule_AddObjectRef(m, "function", (PyObject *)&acpf_function_type) < 0) {
+    Py_DECREF(m);
+    return NULL;
+  }
+  return m;
+}
