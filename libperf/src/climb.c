@@ -15,6 +15,7 @@
 #define RATE_MIN 0.0508         /* 10 ft/min: below it a climb or descent "stops" */
 #define SEARCH_TOP 25000.0      /* highest altitude searched for ceilings, m */
 #define ATM_TROPOPAUSE 11000.0  /* where the lapse rate (and f) jumps, m */
+#define WIND_MAX 200.0          /* largest along-track wind, m/s (as acp_cruise()) */
 
 typedef struct {
   const acp_aircraft *ac;
@@ -183,8 +184,11 @@ static int speed_segment(const phase *ph, run *r, double v1, double mode) {
     st = forces(ph, r->cur.mass - r->cur.fuel_flow * dv / acc0, r->cur.hp, v, 0.0, &p1);
     if (st != ACP_OK) return st;
     const double acc1 = (p1.thrust - p1.drag) / p1.mass;
-    /* climbing must accelerate, descending decelerate */
-    if (ph->descent ? !(acc0 < 0.0 && acc1 < 0.0) : !(acc0 > 0.0 && acc1 > 0.0))
+    /* climbing must accelerate, descending decelerate, with at least the
+       specific excess power (T - D) V/W of RATE_MIN (else the speed change
+       takes unbounded time, as a climb below RATE_MIN would) */
+    const double ps0 = acc0 * r->cur.tas / ACP_G0, ps1 = acc1 * v / ACP_G0;
+    if (ph->descent ? !(ps0 < -RATE_MIN && ps1 < -RATE_MIN) : !(ps0 > RATE_MIN && ps1 > RATE_MIN))
       return ACP_ERR_THRUST;
     p1.mode = mode;
     st = advance(ph, r, dv, acc0, acc1, &p1);
@@ -266,7 +270,8 @@ static int check_args(const acp_aircraft *ac, double mass, double h0, double h1,
     return ACP_ERR_INVALID;
   if (perf_check(ac, NULL, 0) != ACP_OK) return ACP_ERR_INVALID;
   if (*step == 0.0) *step = ACP_CLIMB_STEP_DEFAULT;
-  if (!acp_in_range(*step, 10.0, 1000.0) || !acp_in_range(mass, ACP_POLAR_MASS_MIN, ACP_POLAR_MASS_MAX))
+  if (!acp_in_range(*step, 10.0, 1000.0) || !acp_in_range(mass, ACP_POLAR_MASS_MIN, ACP_POLAR_MASS_MAX) ||
+      !acp_in_range(wind, -WIND_MAX, WIND_MAX))
     return ACP_ERR_RANGE;
   acp_atmos at;
   int st = acp_isa(h0, dtemp, &at);
@@ -459,6 +464,7 @@ int acp_ceilings(const acp_aircraft *ac, double mass, double dtemp, acp_ceiling_
     buffet = ACP_NAN;
   out->service_ceiling = service;
   out->max_climb_altitude = isinf(climb) ? ACP_NAN : climb;
+  if (buffet > SEARCH_TOP) buffet = ACP_NAN; /* above the search range: NaN, as documented */
   out->buffet_altitude = buffet;
   double top = SEARCH_TOP;
   const double limits[] = {out->max_climb_altitude, buffet, ac_value(ac, AK_MAX_ALTITUDE)};

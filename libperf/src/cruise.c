@@ -458,12 +458,20 @@ static int masses_ok(double m0, double m1) {
   return isfinite(m0) && isfinite(m1) && m1 > 0.0 && m0 >= m1;
 }
 
+/* ln(m0/m1); when the quotient overflows (a denormal m1) the difference of
+   the logarithms, which is finite */
+static double log_ratio(double m0, double m1) {
+  const double q = m0 / m1;
+  return isfinite(q) ? log(q) : log(m0) - log(m1);
+}
+
 double acp_breguet_range(double tas, double tsfc, double lift_to_drag, double mass_start,
                          double mass_end) {
   if (!(isfinite(tas) && tas > 0.0) || !(isfinite(tsfc) && tsfc > 0.0) ||
       !(isfinite(lift_to_drag) && lift_to_drag > 0.0) || !masses_ok(mass_start, mass_end))
     return ACP_NAN;
-  return tas / (ACP_G0 * tsfc) * lift_to_drag * log(mass_start / mass_end);
+  const double r = tas / (ACP_G0 * tsfc) * lift_to_drag * log_ratio(mass_start, mass_end);
+  return isfinite(r) ? r : ACP_NAN; /* overflow (a denormal TSFC) is no result */
 }
 
 double acp_breguet_endurance(double tsfc, double lift_to_drag, double mass_start,
@@ -471,7 +479,8 @@ double acp_breguet_endurance(double tsfc, double lift_to_drag, double mass_start
   if (!(isfinite(tsfc) && tsfc > 0.0) || !(isfinite(lift_to_drag) && lift_to_drag > 0.0) ||
       !masses_ok(mass_start, mass_end))
     return ACP_NAN;
-  return lift_to_drag / (ACP_G0 * tsfc) * log(mass_start / mass_end);
+  const double e = lift_to_drag / (ACP_G0 * tsfc) * log_ratio(mass_start, mass_end);
+  return isfinite(e) ? e : ACP_NAN;
 }
 
 double acp_breguet_range_propeller(double propeller_efficiency, double psfc, double lift_to_drag,
@@ -481,5 +490,6 @@ double acp_breguet_range_propeller(double propeller_efficiency, double psfc, dou
       !(isfinite(psfc) && psfc > 0.0) || !(isfinite(lift_to_drag) && lift_to_drag > 0.0) ||
       !masses_ok(mass_start, mass_end))
     return ACP_NAN;
-  return propeller_efficiency / (ACP_G0 * psfc) * lift_to_drag * log(mass_start / mass_end);
+  const double r = propeller_efficiency / (ACP_G0 * psfc) * lift_to_drag * log_ratio(mass_start, mass_end);
+  return isfinite(r) ? r : ACP_NAN;
 }

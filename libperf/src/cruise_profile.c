@@ -203,6 +203,8 @@ static int run(const acp_aircraft *ac, int mode, double cost_index, double mass,
       if (st != ACP_OK) return st;
     }
   }
+  /* an end so small that no fuel is burnt has no mean SAR: out of range */
+  if (!(mass - r.p.mass > 0.0)) return ACP_ERR_RANGE;
   out->time = r.p.time;
   out->distance = r.p.distance;
   out->fuel = mass - r.p.mass;

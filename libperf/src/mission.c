@@ -245,6 +245,9 @@ static int reserves(const acp_aircraft *ac, const acp_mission *ms, acp_trip_resu
 }
 
 static int trip_at(const acp_aircraft *ac, const acp_mission *ms, double tow, acp_trip_result *o) {
+  /* nothing of an earlier trip (acp_trip_for_zero_fuel_mass() iterates)
+     survives an error: every field NaN until it is computed */
+  result_nan(o);
   if (!acp_in_range(tow, ACP_POLAR_MASS_MIN, ACP_POLAR_MASS_MAX)) return ACP_ERR_RANGE;
   int st = fly(ac, ms, tow, o);
   if (st == ACP_OK) st = reserves(ac, ms, o);

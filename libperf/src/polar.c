@@ -46,7 +46,9 @@ double acp_winglet_aspect_ratio(double aspect_ratio, double winglet_height, doub
   if (!(isfinite(aspect_ratio) && aspect_ratio > 0.0) || !(isfinite(span) && span > 0.0) ||
       !acp_in_range(winglet_height, 0.0, 0.5 * span))
     return ACP_NAN;
-  return aspect_ratio * (1.0 + 1.9 * winglet_height / span);
+  /* h/b first: it is exact at h = b/2, where 1.9 h of a denormal h rounds */
+  const double a = aspect_ratio * (1.0 + 1.9 * (winglet_height / span));
+  return isfinite(a) ? a : ACP_NAN; /* overflow (a huge A) is no result */
 }
 
 double acp_korn_mach(double kappa, double thickness_ratio, double sweep, double cl) {
@@ -69,8 +71,7 @@ static double lock(double mach, double mcrit) {
 }
 
 double acp_wave_drag_coefficient(double mach, double mach_critical) {
-  if (!acp_in_range(mach, 0.0, ACP_MACH_MAX) || !isfinite(mach_critical) ||
-      mach_critical > ACP_MACH_MAX)
+  if (!acp_in_range(mach, 0.0, ACP_MACH_MAX) || !acp_in_range(mach_critical, 0.0, ACP_MACH_MAX))
     return ACP_NAN;
   return lock(mach, mach_critical);
 }
@@ -180,6 +181,8 @@ int polar_eval(const acp_aircraft *ac, const acp_atmos *atm, double lift, double
   const double s = ac->v[AK_WING_AREA];
   const double q = 0.5 * atm->density * tas * tas;
   const double cl = lift / (q * s);
+  /* a speed so low that q underflows: no finite lift coefficient */
+  if (!isfinite(cl)) return ACP_ERR_RANGE;
   double cd0;
   if (ac->ncomp == 0) {
     cd0 = ac->v[AK_CD0];
@@ -219,6 +222,10 @@ int polar_eval(const acp_aircraft *ac, const acp_atmos *atm, double lift, double
   pp->cd_wave = cdw;
   pp->cd = cd0 + pp->cd_induced + cdw;
   pp->induced_factor = k;
+  if (!isfinite(pp->cd * q * s)) { /* the drag overflows a double */
+    polar_nan(pp);
+    return ACP_ERR_RANGE;
+  }
   return ACP_OK;
 }
 

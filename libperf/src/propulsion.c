@@ -43,7 +43,8 @@ double acp_turbofan_tsfc(double mach, double hp, double dtemp, double c0, double
   if (!isfinite(c0) || !isfinite(c1) || c0 < 0.0 || c1 < 0.0 || !isfinite(mach) ||
       !acp_in_range(mach, 0.0, ACP_POLAR_MACH_MAX) || acp_isa(hp, dtemp, &at) != ACP_OK)
     return ACP_NAN;
-  return (c0 + c1 * mach) * sqrt(at.temperature / ACP_T0);
+  const double tsfc = (c0 + c1 * mach) * sqrt(at.temperature / ACP_T0);
+  return isfinite(tsfc) ? tsfc : ACP_NAN; /* overflow (huge c0 or c1) is no result */
 }
 
 double acp_piston_power_lapse(double density_ratio) {
@@ -126,7 +127,8 @@ static int engine_state_at(const acp_aircraft *ac, const acp_atmos *at, double m
 static void fill(acp_engine_point *out, const engine_state *e, double thrust, double tas) {
   out->thrust = thrust;
   out->fuel_flow = fmax(e->tsfc * thrust, e->idle_fuel_flow);
-  out->tsfc = thrust > 0.0 ? out->fuel_flow / thrust : ACP_NAN;
+  out->tsfc = out->fuel_flow / thrust;
+  if (!isfinite(out->tsfc)) out->tsfc = ACP_NAN; /* no thrust (or a denormal one): no TSFC */
   out->shaft_power = isnan(e->eta) ? ACP_NAN : thrust * tas / e->eta;
 }
 

@@ -55,7 +55,8 @@ int acp_speed_schedule(double hp, double dtemp, double cas_low, double hp_limit,
                        double mach, double vmo, double mmo, acp_schedule_point *out) {
   if (!out) return ACP_ERR_INVALID;
   set_nan(out);
-  const double in[] = {cas_low, hp_limit, cas, mach, vmo, mmo};
+  /* NaN/Inf anywhere is ACP_ERR_INVALID before any range is looked at */
+  const double in[] = {hp, dtemp, cas_low, hp_limit, cas, mach, vmo, mmo};
   for (size_t i = 0; i < sizeof in / sizeof in[0]; ++i)
     if (!isfinite(in[i])) return ACP_ERR_INVALID;
   if (!(cas_low > 0.0) || !(cas > 0.0) || !(mach > 0.0) || !(vmo > 0.0) || !(mmo > 0.0))
@@ -89,7 +90,7 @@ int acp_speed_schedule(double hp, double dtemp, double cas_low, double hp_limit,
     m = mmo;
     mode = ACP_MODE_MMO;
   }
-  if (isnan(m)) return ACP_ERR_RANGE;
+  if (!(m > 0.0)) return ACP_ERR_RANGE; /* NaN, or a CAS so small its Mach underflows to 0 */
 
   const double tstd = at.temperature - dtemp, lapse = lapse_at(hp);
   const int constant_mach = mode == ACP_MODE_MACH || mode == ACP_MODE_MMO;
@@ -100,7 +101,12 @@ int acp_speed_schedule(double hp, double dtemp, double cas_low, double hp_limit,
   out->mode = mode;
   out->mach = m;
   out->tas = m * at.sound_speed;
-  out->cas = acp_mach_to_cas(m, hp);
+  /* the CAS flown, exactly, in the CAS modes: the round trip through the
+     impact pressure loses digits when it is a denormal (tiny speeds) */
+  out->cas = mode == ACP_MODE_LOW_CAS ? cas_low
+             : mode == ACP_MODE_CAS   ? cas
+             : mode == ACP_MODE_VMO   ? vmo
+                                      : acp_mach_to_cas(m, hp);
   out->crossover = crossover;
   out->dtas_dhp = d;
   out->acceleration_factor = factor(out->tas, d, at.temperature, tstd);

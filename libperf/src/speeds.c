@@ -251,7 +251,7 @@ int acp_speed_stability(const acp_aircraft *ac, double mass, double hp, double d
   if (!isfinite(tas)) return ACP_ERR_INVALID;
   if (!(tas > 0.0)) return ACP_ERR_RANGE;
   const double slope = slope_at(&s, OBJ_DRAG, tas);
-  if (isnan(slope)) return ACP_ERR_RANGE;
+  if (!isfinite(slope)) return ACP_ERR_RANGE; /* also a difference that overflows */
   out->slope = slope;
   out->stable = slope > 0.0 ? 1.0 : slope < 0.0 ? -1.0 : 0.0;
   return minimise(&s, OBJ_DRAG, &out->vmd);

@@ -74,7 +74,8 @@ typedef struct {
  *
  * @param ac    aircraft with drag, engine and climb-schedule keys
  * @param mass  kg; hp pressure altitude (m); dtemp ISA deviation (K)
- * @param wind  along-track wind component (m/s), positive tailwind
+ * @param wind  along-track wind component (m/s), positive tailwind, |wind| <= 200
+ *              (as acp_cruise(); beyond it ACP_ERR_RANGE, also in every function below)
  * @param out   out: the point (time and distance 0); NaN on error
  * @return ACP_OK (the rate may be negative: no climb possible there);
  *         ACP_ERR_INVALID (NULL, NaN/Inf, missing keys); ACP_ERR_RANGE.
@@ -92,7 +93,8 @@ ACP_API int acp_descent_point(const acp_aircraft *ac, double mass, double hp, do
  * @param step  pressure-altitude step (m), 10 to 1,000; 0 for ACP_CLIMB_STEP_DEFAULT
  * @param out   out: totals; NaN on error
  * @return ACP_OK; ACP_ERR_INVALID; ACP_ERR_RANGE (altitudes outside the
- *         model, speeds beyond the drag model); ACP_ERR_THRUST (the climb rate
+ *         model, speeds beyond the drag model, |wind| above 200 m/s, mass
+ *         outside 1 to 1,000,000 kg); ACP_ERR_THRUST (the climb rate
  *         reaches zero before hp_end: the altitude cannot be reached).
  */
 ACP_API int acp_climb(const acp_aircraft *ac, double mass, double hp_start, double hp_end,

@@ -250,7 +250,8 @@ ACP_API int acp_cruise_trace(const acp_aircraft *ac, int mode, double cost_index
  * @param lift_to_drag L/D, > 0
  * @param mass_start   m0 (kg), > 0
  * @param mass_end     m1 (kg), 0 < m1 <= m0
- * @return still-air range (m); NaN on invalid input.
+ * @return still-air range (m); NaN on invalid input or when the range overflows a
+ *         double (a TSFC so small, e.g. denormal, that 1/c does).
  * @note Breguet (1923); in every aircraft-performance text, e.g. Anderson,
  *       "Aircraft Performance and Design" (1999), section 5.13 (from memory).
  */
@@ -262,7 +263,7 @@ ACP_API double acp_breguet_range(double tas, double tsfc, double lift_to_drag, d
  * E = (1/(g0 c)) (L/D) ln(m0/m1).
  *
  * @param tsfc kg/(N s), > 0; lift_to_drag > 0; mass_start >= mass_end > 0 (kg)
- * @return endurance (s); NaN on invalid input.
+ * @return endurance (s); NaN on invalid input or when it overflows a double.
  */
 ACP_API double acp_breguet_endurance(double tsfc, double lift_to_drag, double mass_start,
                                      double mass_end);
@@ -274,7 +275,7 @@ ACP_API double acp_breguet_endurance(double tsfc, double lift_to_drag, double ma
  * @param propeller_efficiency eta, 0 < eta <= 1
  * @param psfc                 power-specific fuel consumption cp, kg/(W s), > 0
  * @param lift_to_drag         L/D, > 0; mass_start >= mass_end > 0 (kg)
- * @return still-air range (m); NaN on invalid input.
+ * @return still-air range (m); NaN on invalid input or when it overflows a double.
  */
 ACP_API double acp_breguet_range_propeller(double propeller_efficiency, double psfc,
                                            double lift_to_drag, double mass_start,

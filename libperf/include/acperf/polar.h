@@ -27,7 +27,11 @@
  *
  * Validity (enforced): mass 1 kg to 1,000,000 kg; TAS > 0 up to Mach
  * ACP_POLAR_MACH_MAX; hp and dtemp as acp_isa(); load factor 0 to 10; bank
- * angle -85 deg to 85 deg; each component's Reynolds number 1e3 to 1e10.
+ * angle -85 deg to 85 deg, and its load factor 1/cos(bank) at most 10, so
+ * in effect |bank| <= acos(0.1) = 84.26 deg; each component's Reynolds number 1e3 to 1e10;
+ * with a wave-drag model (`korn_kappa`) a lift coefficient of at most 10 in
+ * magnitude (the Korn equation's range here); a speed so low that the lift
+ * coefficient or the drag is not a finite double is out of range.
  * Results at a lift coefficient above cl_max are the polar's extrapolation.
  */
 #ifndef ACPERF_POLAR_H
@@ -114,7 +118,8 @@ ACP_API int acp_drag_load(const acp_aircraft *ac, double mass, double hp, double
 
 /**
  * Drag in a level coordinated turn at bank angle phi (rad, |phi| <= 85 deg):
- * load factor n = 1/cos(phi). Errors as acp_drag().
+ * load factor n = 1/cos(phi), at most 10 as in acp_drag_load(), so
+ * |phi| <= acos(0.1) = 84.26 deg; beyond, ACP_ERR_RANGE. Errors as acp_drag().
  */
 ACP_API int acp_drag_bank(const acp_aircraft *ac, double mass, double hp, double dtemp,
                           double tas, double bank, acp_drag_parts *out);
@@ -191,7 +196,7 @@ ACP_API double acp_oswald_estimate(double aspect_ratio, double sweep_le);
  * @param aspect_ratio A, > 0
  * @param winglet_height h (m), 0 to b/2
  * @param span b (m), > 0
- * @return A_eff; NaN on invalid input.
+ * @return A_eff; NaN on invalid input or when A_eff overflows a double.
  */
 ACP_API double acp_winglet_aspect_ratio(double aspect_ratio, double winglet_height, double span);
 
@@ -205,7 +210,7 @@ ACP_API double acp_winglet_aspect_ratio(double aspect_ratio, double winglet_heig
  *                        NACA 6-series, 0.95 supercritical)
  * @param thickness_ratio t/c, 0 to 0.3
  * @param sweep           wing sweep (rad), 0 to 60 deg (the library uses the quarter-chord sweep)
- * @param cl              lift coefficient (its magnitude is used), |CL| <= 3
+ * @param cl              lift coefficient (its magnitude is used), |CL| <= 10
  * @return Mdd; NaN on invalid input.
  */
 ACP_API double acp_korn_mach(double kappa, double thickness_ratio, double sweep, double cl);

@@ -47,7 +47,7 @@ enum acp_rating {
 typedef struct {
   double thrust;       /**< net thrust of all engines, N */
   double fuel_flow;    /**< fuel flow of all engines, kg/s */
-  double tsfc;         /**< thrust-specific fuel consumption, kg/(N s) */
+  double tsfc;         /**< thrust-specific fuel consumption, kg/(N s); NaN at zero thrust */
   double shaft_power;  /**< shaft power of all engines, W (propeller engines; NaN for jets) */
 } acp_engine_point;
 
@@ -69,7 +69,7 @@ ACP_API double acp_turbofan_thrust_lapse(double mach, double hp, double dtemp,
  * @param mach  Mach number, 0 to 0.95
  * @param hp    pressure altitude (m); dtemp ISA deviation (K)
  * @param c0,c1 coefficients, kg/(N s) (multiply lbm/(lbf h) by ACP_TSFC_LB_LBF_H), >= 0
- * @return TSFC; NaN on invalid input.
+ * @return TSFC; NaN on invalid input or when the TSFC overflows a double.
  */
 ACP_API double acp_turbofan_tsfc(double mach, double hp, double dtemp, double c0, double c1);
 
@@ -82,7 +82,8 @@ ACP_API double acp_piston_power_lapse(double density_ratio);
  * @param ac     aircraft with propulsion keys (docs/aircraft-format.md)
  * @param rating an acp_rating
  * @param hp     pressure altitude (m); dtemp ISA deviation (K)
- * @param tas    true airspeed (m/s), >= 0 (propeller engines: > 0)
+ * @param tas    true airspeed (m/s), >= 0 (propeller engines: >= 1, since
+ *               propeller thrust is eta P/V; below it ACP_ERR_RANGE)
  * @param out    out: thrust, fuel flow, TSFC (and shaft power); NaN on error
  * @return ACP_OK; ACP_ERR_INVALID (NULL, NaN/Inf, no or incomplete propulsion
  *         keys); ACP_ERR_RANGE (Mach above 0.95, outside the atmosphere).
@@ -96,8 +97,10 @@ ACP_API int acp_engine_rating(const acp_aircraft *ac, int rating, double hp, dou
  * fuel flow.
  *
  * @param thrust total net thrust (N), between the idle thrust and the maximum
- * @return ACP_OK; ACP_ERR_INVALID; ACP_ERR_RANGE (outside the atmosphere or
- *         Mach 0.95); ACP_ERR_THRUST (more than the maximum thrust there).
+ * @return ACP_OK; ACP_ERR_INVALID (NULL, NaN/Inf, a negative thrust);
+ *         ACP_ERR_RANGE (outside the atmosphere or Mach 0.95, a thrust below
+ *         the idle thrust); ACP_ERR_THRUST (more than the maximum thrust there).
+ *         At zero thrust (idle_thrust_fraction 0) the TSFC is NaN.
  */
 ACP_API int acp_engine_thrust(const acp_aircraft *ac, double thrust, double hp, double dtemp,
                               double tas, acp_engine_point *out);

@@ -62,8 +62,11 @@ typedef struct {
  * @param mmo      maximum operating Mach, > 0; a Mach above it is capped
  * @param out      out: the point; all NaN on error
  * @return ACP_OK; ACP_ERR_INVALID (NULL, NaN/Inf, speeds <= 0);
- *         ACP_ERR_RANGE (hp/dtemp outside the atmosphere, Mach above 5, or a
- *         constant-CAS mode above Mach 1, where the subsonic relations end).
+ *         ACP_ERR_RANGE (hp/dtemp outside the atmosphere, Mach above 5, a
+ *         constant-CAS mode above Mach 1, where the subsonic relations end,
+ *         or a CAS so small that its Mach number underflows to 0). NaN/Inf in
+ *         any argument is ACP_ERR_INVALID before any range is looked at. In
+ *         the CAS modes `cas` is exactly the CAS flown (cas_low, cas or vmo).
  */
 ACP_API int acp_speed_schedule(double hp, double dtemp, double cas_low, double hp_limit,
                                double cas, double mach, double vmo, double mmo,

@@ -125,7 +125,10 @@ ACP_API size_t acp_glide_n(const acp_aircraft *ac, size_t n, const double *mass,
  * VMD, "the back of the drag curve"). Common practice.
  *
  * @param tas true airspeed (m/s)
- * @return as acp_drag(); vmd NaN (status ACP_ERR_RANGE) if VMD cannot be had.
+ * @return as acp_drag(); vmd NaN (status ACP_ERR_RANGE) if VMD cannot be had;
+ *         ACP_ERR_RANGE when the slope is not a finite double. The slope has
+ *         no bound of its own: at low speed it grows as the induced drag's
+ *         -2 D_i/V.
  */
 ACP_API int acp_speed_stability(const acp_aircraft *ac, double mass, double hp, double dtemp,
                                 double tas, acp_stability *out);
