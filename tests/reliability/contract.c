@@ -17,6 +17,7 @@ void contract_init(contract *c, const double *args, size_t nargs, uint32_t choic
   c->record = record;
   c->maxrecord = maxrecord;
   c->fail = fail;
+  c->sample = 8;
 }
 
 double contract_arg(contract *c) {
@@ -151,8 +152,117 @@ void contract_array3(contract *c, const char *fn, contract_array3_fn fa, contrac
   array_outputs(c, fn, n, bad, out, want, null_out);
 }
 
+double contract_range(contract *c, double lo, double hi) {
+  const double x = contract_arg(c);
+  switch (contract_pick(c, 10)) {
+  case 0: return x;
+  case 1: return lo;
+  case 2: return hi;
+  case 3: return nextafter(lo, -HUGE_VAL);
+  case 4: return nextafter(hi, HUGE_VAL);
+  default: {
+    /* the fractional part of the value's magnitude, 0.5 for NaN and Inf */
+    const double a = fabs(x);
+    const double u = isfinite(a) ? a - floor(a) : 0.5;
+    return lo + (hi - lo) * u;
+  }
+  }
+}
+
+int contract_sampled(contract *c) {
+  return c->sample != 0 && contract_pick(c, c->sample) == 0;
+}
+
+static acp_aircraft *g_demo[2]; /* written once before threads start, then read-only */
+
+int contract_models_init(const char *examples_dir) {
+  static const char *const FILES[2] = {"regional_jet.toml", "light_twin.toml"};
+  for (int i = 0; i < 2; ++i) {
+    char path[1024], err[256];
+    snprintf(path, sizeof path, "%s/aircraft/%s", examples_dir, FILES[i]);
+    g_demo[i] = acp_aircraft_new();
+    if (!g_demo[i] || acp_aircraft_load(g_demo[i], path, err, sizeof err) != ACP_OK) {
+      fprintf(stderr, "contract: cannot load %s: %s\n", path, g_demo[i] ? err : "no memory");
+      return 1;
+    }
+  }
+  return 0;
+}
+
+void contract_models_free(void) {
+  for (int i = 0; i < 2; ++i) {
+    acp_aircraft_free(g_demo[i]);
+    g_demo[i] = NULL;
+  }
+}
+
+const acp_aircraft *contract_shared_aircraft(contract *c) {
+  return g_demo[contract_pick(c, 2)];
+}
+
+/* Numeric keys a fuzzed private copy may change, with their documented
+   ranges (docs/aircraft-format.md): the values mostly land inside. */
+static const struct {
+  const char *key;
+  double lo, hi;
+} FUZZ_KEYS[] = {
+    {"wing_area", 0.1, 5000.0}, {"span", 0.3, 150.0}, {"oswald", 0.3, 1.0},
+    {"cl_max", 0.3, 5.0}, {"cl_min_drag", -0.5, 1.5}, {"winglet_height", 0.0, 20.0},
+    {"korn_kappa", 0.7, 1.0}, {"cd_misc", 0.0, 0.1}, {"leakage_fraction", 0.0, 0.5},
+    {"engine_count", 1.0, 8.0}, {"engine_thrust", 100.0, 1.0e6}, {"throttle_ratio", 0.9, 1.3},
+    {"tsfc_c0", 1e-6, 1e-3}, {"tsfc_c1", 0.0, 1e-3}, {"engine_power", 1e3, 2e7},
+    {"power_lapse_exponent", 0.3, 1.5}, {"propeller_efficiency", 0.3, 0.95},
+    {"psfc", 1e-8, 1e-6}, {"climb_rating", 0.3, 1.0}, {"cruise_rating", 0.3, 1.0},
+    {"idle_thrust_fraction", 0.0, 0.3}, {"idle_fuel_flow", 0.0, 5.0}, {"vmo", 20.0, 400.0},
+    {"mmo", 0.1, 0.95}, {"max_altitude", 0.0, 25000.0}, {"cl_buffet", 0.2, 2.0},
+    {"speed_limit_cas", 20.0, 300.0}, {"speed_limit_altitude", -5000.0, 25000.0},
+    {"climb_cas", 20.0, 300.0}, {"climb_mach", 0.05, 0.95}, {"descent_cas", 20.0, 300.0},
+    {"descent_mach", 0.05, 0.95}, {"cruise_mach", 0.05, 0.95},
+    {"mass_max_takeoff", 1.0, 1e6}, {"fuel_capacity", 0.0, 5e5},
+    {"component.wing.wetted_area", 1e-4, 1e4}, {"component.wing.roughness", 0.0, 1e-3},
+    {"component.fuselage.length", 0.01, 300.0},
+};
+#define NFUZZ_KEYS (sizeof FUZZ_KEYS / sizeof FUZZ_KEYS[0])
+
+acp_aircraft *contract_private_aircraft(contract *c) {
+  acp_aircraft *own = acp_aircraft_new();
+  if (!own) return NULL;
+  if (acp_aircraft_copy(own, contract_shared_aircraft(c)) != ACP_OK)
+    contract_violation(c, "acp_aircraft_copy", "copy of a demo aircraft refused");
+  const unsigned nkeys = 1u + contract_pick(c, 3);
+  for (unsigned i = 0; i < nkeys; ++i) {
+    const unsigned k = contract_pick(c, (unsigned)NFUZZ_KEYS);
+    const double v = contract_range(c, FUZZ_KEYS[k].lo, FUZZ_KEYS[k].hi);
+    const int st = acp_aircraft_set(own, FUZZ_KEYS[k].key, v);
+    contract_code(c, "acp_aircraft_set", st, ST(ACP_ERR_INVALID) | ST(ACP_ERR_RANGE));
+  }
+  return own;
+}
+
+const acp_aircraft *contract_some_aircraft(contract *c, acp_aircraft **own) {
+  *own = NULL;
+  if (contract_pick(c, 4) != 0) return contract_shared_aircraft(c);
+  *own = contract_private_aircraft(c);
+  return *own;
+}
+
 void contract_run(contract *c) {
+  contract_run_foundation(c);
+  contract_run_models(c);
+}
+
+void contract_run_foundation(contract *c) {
 #define CONTRACT_MODULE(m) contract_##m(c);
+#define CONTRACT_MODEL(m)
 #include "contract_modules.h"
 #undef CONTRACT_MODULE
+#undef CONTRACT_MODEL
+}
+
+void contract_run_models(contract *c) {
+#define CONTRACT_MODULE(m)
+#define CONTRACT_MODEL(m) contract_##m(c);
+#include "contract_modules.h"
+#undef CONTRACT_MODULE
+#undef CONTRACT_MODEL
 }

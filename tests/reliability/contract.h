@@ -17,6 +17,7 @@
 #define CONTRACT_MAX_ARGS 64
 
 typedef struct contract contract;
+typedef struct acp_aircraft acp_aircraft;
 
 /* Called on every violation with a message naming the function and inputs. */
 typedef void (*contract_fail_fn)(contract *c, const char *message);
@@ -31,6 +32,7 @@ struct contract {
   contract_fail_fn fail;
   unsigned long failures;
   unsigned long calls;   /* public calls made */
+  unsigned sample;       /* model modules: an expensive function runs on 1 in `sample` calls (0: never) */
 };
 
 void contract_init(contract *c, const double *args, size_t nargs, uint32_t choice,
@@ -40,6 +42,27 @@ void contract_init(contract *c, const double *args, size_t nargs, uint32_t choic
 double contract_arg(contract *c);
 /* Next selector value in [0, n). */
 unsigned contract_pick(contract *c, unsigned n);
+
+/* An argument for a function with documented interval [lo, hi]: mostly
+   spread inside it (from the stream's next value), sometimes the raw value,
+   an edge or the next double outside an edge. */
+double contract_range(contract *c, double lo, double hi);
+/* Whether this call runs an expensive function (1 in c->sample). */
+int contract_sampled(contract *c);
+
+/* The shared read-only models of the model modules: the demo aircraft
+   (examples/aircraft/regional_jet.toml and light_twin.toml), loaded once
+   before any thread starts. contract_models_init() returns 0 on success. */
+int contract_models_init(const char *examples_dir);
+void contract_models_free(void);
+/* One of the shared demo aircraft, chosen by the stream. */
+const acp_aircraft *contract_shared_aircraft(contract *c);
+/* A private copy (acp_aircraft_copy) of a demo aircraft with up to three
+   keys set to fuzzed values (acp_aircraft_set); NULL when out of memory.
+   Free it with acp_aircraft_free(). */
+acp_aircraft *contract_private_aircraft(contract *c);
+/* Shared or private (*own is then the copy to free, else NULL). */
+const acp_aircraft *contract_some_aircraft(contract *c, acp_aircraft **own);
 
 /* Record an output for the bitwise comparisons of the thread test. */
 void contract_record(contract *c, double v);
@@ -84,10 +107,16 @@ void contract_array3(contract *c, const char *fn, contract_array3_fn fa, contrac
 
 /* The modules covered, one function each (see contract_modules.h). */
 #define CONTRACT_MODULE(m) void contract_##m(contract *c);
+#define CONTRACT_MODEL(m) void contract_##m(contract *c);
 #include "contract_modules.h"
 #undef CONTRACT_MODULE
+#undef CONTRACT_MODEL
 
-/* Every covered module in turn. */
+/* Every covered module in turn (the thread test). */
 void contract_run(contract *c);
+/* The foundation modules only (fuzz_numeric: fast, many executions). */
+void contract_run_foundation(contract *c);
+/* The model modules only, on the demo aircraft (fuzz_models). */
+void contract_run_models(contract *c);
 
 #endif

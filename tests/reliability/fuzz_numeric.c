@@ -1,5 +1,5 @@
-/* libFuzzer target: every public numeric function of the covered modules
-   with arbitrary doubles, checked against the documented contract
+/* libFuzzer target: every public numeric function of the foundation modules
+   (contract_modules.h: CONTRACT_MODULE) with arbitrary doubles, checked against the documented contract
    (contract.h). A violation prints the function and inputs and aborts, so
    libFuzzer keeps the input as a crash artifact. */
 #include <stdint.h>
@@ -37,6 +37,6 @@ int LLVMFuzzerTestOneInput(const uint8_t *data, size_t size) {
   const size_t n = decode_doubles(data, size, args, CONTRACT_MAX_ARGS, &choice);
   contract c;
   contract_init(&c, args, n, choice, NULL, 0, on_violation);
-  contract_run(&c);
+  contract_run_foundation(&c);
   return 0;
 }

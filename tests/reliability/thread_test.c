@@ -3,7 +3,9 @@
    shared read-only model) called from several threads at once; each thread's
    results must equal the single-threaded results bit for bit. Built twice:
    plain, and with ThreadSanitizer, which reports any data race.
-   usage: thread_test <aircraft text file> */
+   The model modules of the contract run on the demo aircraft of
+   examples/aircraft (contract_models_init()), shared read-only.
+   usage: thread_test <aircraft text file> <examples dir> */
 #include <math.h>
 #include <pthread.h>
 #include <stdint.h>
@@ -123,10 +125,11 @@ static char *read_file(const char *path) {
 }
 
 int main(int argc, char **argv) {
-  if (argc < 2 || !(g_text = read_file(argv[1]))) {
-    fprintf(stderr, "usage: thread_test <aircraft text file>\n");
+  if (argc < 3 || !(g_text = read_file(argv[1]))) {
+    fprintf(stderr, "usage: thread_test <aircraft text file> <examples dir>\n");
     return 2;
   }
+  if (contract_models_init(argv[2]) != 0) return 1;
   acp_aircraft *ac = acp_aircraft_new();
   char err[256];
   if (!ac || acp_aircraft_parse(ac, g_text, err, sizeof err) != ACP_OK) {
@@ -163,6 +166,7 @@ int main(int argc, char **argv) {
     bad += w[i].mismatches;
   }
   acp_aircraft_free(ac);
+  contract_models_free();
   printf("%d threads x %d argument sets: %zu outputs per pass, %zu model outputs, %lu mismatches\n",
          NTHREADS, NSETS, total, g_model_n, bad);
   return bad == 0 ? 0 : 1;
