@@ -105,10 +105,10 @@ typedef double (*scalar_form)(double value, double hp, double dtemp);
    function for every point the closed forms left as NaN. */
 static size_t convert(size_t n, const double *in, const double *hp, const double *dtemp,
                       double *out, quantity from, quantity to, scalar_form scalar) {
-  double t[ACP_BLOCK], p[ACP_BLOCK], m[ACP_BLOCK], tmp[ACP_BLOCK];
+  double t[ACP_BLOCK], p[ACP_BLOCK], m[ACP_BLOCK], tmp[ACP_BLOCK] = {0.0};
   size_t bad = 0;
   for (size_t i = 0; i < n; i += ACP_BLOCK) {
-    const size_t len = n - i < ACP_BLOCK ? n - i : ACP_BLOCK;
+    const size_t len = block_length(n, i);
     double *dst = out ? out + i : tmp;
     if (!in || !hp) {
       for (size_t j = 0; j < len; ++j) dst[j] = ACP_NAN;

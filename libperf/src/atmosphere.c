@@ -176,7 +176,7 @@ size_t acp_isa_n(size_t n, const double *hp, const double *dtemp, double *temper
   double t[ACP_BLOCK], p[ACP_BLOCK];
   size_t bad = 0;
   for (size_t i = 0; i < n; i += ACP_BLOCK) {
-    const size_t m = n - i < ACP_BLOCK ? n - i : ACP_BLOCK;
+    const size_t m = block_length(n, i);
     if (hp) {
       bad += atm_block(m, hp + i, dtemp ? dtemp + i : NULL, t, p);
     } else {

@@ -398,7 +398,8 @@ static double climb_rate(const phase *ph, double mass, double hp) {
 static double ceiling(const phase *ph, double mass, double rate) {
   double lo = 0.0;
   if (!(climb_rate(ph, mass, lo) >= rate)) return -(double)INFINITY;
-  for (double hi = 250.0; hi <= SEARCH_TOP; hi += 250.0) {
+  for (int k = 1; k * 250.0 <= SEARCH_TOP; ++k) {
+    double hi = k * 250.0;
     if (climb_rate(ph, mass, hi) >= rate) {
       lo = hi;
       continue;
@@ -422,7 +423,8 @@ static double sar_at(const acp_aircraft *ac, double mass, double hp, double dtem
 /* Altitude of the greatest SAR below top: a 100 m scan, then golden section. */
 static double optimum_altitude(const acp_aircraft *ac, double mass, double dtemp, double top) {
   double best = ACP_NAN, best_h = ACP_NAN;
-  for (double h = 0.0; h <= top; h += 100.0) {
+  for (int k = 0; k * 100.0 <= top; ++k) {
+    const double h = k * 100.0;
     const double s = sar_at(ac, mass, h, dtemp);
     if (!isnan(s) && (isnan(best) || s > best)) {
       best = s;

@@ -155,6 +155,7 @@ static int fly(const acp_aircraft *ac, const acp_mission *ms, double tow, acp_tr
   if (hc > top) return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_ABOVE_MAX_ALTITUDE, hc - top);
   acp_profile cl, de;
   acp_cruise_result cr;
+  memset(&cr, 0, sizeof cr); /* every field is set by the loop's first pass; zero meanwhile */
   int st = acp_climb(ac, tow, ho, hc, dtemp, wind, v[MK_CLIMB_STEP], &cl);
   if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CLIMB, ACP_NAN);
   if (st != ACP_OK) return st;

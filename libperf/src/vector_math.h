@@ -36,4 +36,12 @@ ACP_SIMD_DECL double expm1(double);
 /* Elements per block of the array kernels: stack buffers, no allocation. */
 #define ACP_BLOCK 256
 
+#include <stddef.h>
+
+/* Length of the block starting at element i of n (1 to ACP_BLOCK for i < n). */
+static inline size_t block_length(size_t n, size_t i) {
+  const size_t left = n - i;
+  return left < ACP_BLOCK ? left : ACP_BLOCK;
+}
+
 #endif /* ACPERF_VECTOR_MATH_H */
