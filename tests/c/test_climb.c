@@ -4,21 +4,10 @@
 #include <stdlib.h>
 
 #include "check.h"
-
-static acp_aircraft *load(const char *file) {
-  char path[512], err[256];
-  snprintf(path, sizeof path, "%s/aircraft/%s", ACP_EXAMPLES_DIR, file);
-  acp_aircraft *ac = acp_aircraft_new();
-  assert_non_null(ac);
-  if (acp_aircraft_load(ac, path, err, sizeof err) != ACP_OK) {
-    print_error("%s: %s\n", path, err);
-    fail();
-  }
-  return ac;
-}
+#include "fixtures.h"
 
 static int setup(void **state) {
-  *state = load("regional_jet.toml");
+  *state = aircraft_from_example("regional_jet.toml");
   return 0;
 }
 
@@ -205,7 +194,7 @@ static void test_errors(void **state) {
 /* The light twin turboprop climbs too (propeller thrust eta P/V). */
 static void test_turboprop(void **state) {
   (void)state;
-  acp_aircraft *ac = load("light_twin.toml");
+  acp_aircraft *ac = aircraft_from_example("light_twin.toml");
   acp_profile a, b;
   assert_int_equal(acp_climb(ac, 5500.0, 1000 * FT, 20000 * FT, 0.0, 0.0, 304.8, &a), ACP_OK);
   assert_int_equal(acp_climb(ac, 5500.0, 1000 * FT, 20000 * FT, 0.0, 0.0, 152.4, &b), ACP_OK);

@@ -5,31 +5,11 @@
    definitions, step halving, step climbs, traces, errors. Sources beside
    each check. */
 #include "check.h"
+#include "fixtures.h"
 
 #include <acperf.h>
 
 #define PI 3.14159265358979323846
-
-static acp_aircraft *make(const char *text) {
-  acp_aircraft *ac = acp_aircraft_new();
-  char err[256];
-  assert_non_null(ac);
-  const int st = acp_aircraft_parse(ac, text, err, sizeof err);
-  if (st != ACP_OK) print_error("parse: %s\n", err);
-  assert_int_equal(st, ACP_OK);
-  return ac;
-}
-
-static acp_aircraft *load_example(const char *name) {
-  char path[512], err[256];
-  snprintf(path, sizeof path, "%s/aircraft/%s", ACP_EXAMPLES_DIR, name);
-  acp_aircraft *ac = acp_aircraft_new();
-  assert_non_null(ac);
-  const int st = acp_aircraft_load(ac, path, err, sizeof err);
-  if (st != ACP_OK) print_error("%s: %s\n", path, err);
-  assert_int_equal(st, ACP_OK);
-  return ac;
-}
 
 /* A jet with a parabolic polar (cd0 only, no wave drag) and a TSFC that does
    not depend on speed (tsfc_c1 = 0) nor has an idle floor: at constant
@@ -60,7 +40,7 @@ static double tsfc_at(double hp) { return 1.6e-5 * sqrt(air(hp).temperature / AC
    endurance of a jet, section 6.14; from memory). */
 static void test_endurance_breguet(void **state) {
   (void)state;
-  acp_aircraft *ac = make(PARABOLIC_JET);
+  acp_aircraft *ac = aircraft_from_text(PARABOLIC_JET);
   const double m0 = 30000.0, fuel = 4000.0, c = tsfc_at(HP);
   const double ld_max = 1.0 / (2.0 * sqrt(CD0 * K_IND)); /* closed form of the parabolic polar */
   acp_cruise_result r;
@@ -94,7 +74,7 @@ static void test_endurance_breguet(void **state) {
    "Introduction to Flight", section 6.13; from memory). */
 static void test_max_range_constant_cl(void **state) {
   (void)state;
-  acp_aircraft *ac = make(PARABOLIC_JET);
+  acp_aircraft *ac = aircraft_from_text(PARABOLIC_JET);
   const double m0 = 30000.0, fuel = 5000.0, m1 = m0 - fuel, c = tsfc_at(HP);
   const double rho = air(HP).density;
   const double cl = sqrt(CD0 / (3.0 * K_IND)), cd = CD0 + K_IND * cl * cl;
@@ -126,7 +106,7 @@ static void test_max_range_constant_cl(void **state) {
    chapter 5; from memory). */
 static void test_fixed_mach_arctangent(void **state) {
   (void)state;
-  acp_aircraft *ac = make(PARABOLIC_JET);
+  acp_aircraft *ac = aircraft_from_text(PARABOLIC_JET);
   const acp_atmos a = air(HP);
   const double v = 0.6 * a.sound_speed, q = 0.5 * a.density * v * v, c = tsfc_at(HP);
   const double m0 = 30000.0, fuel = 6000.0, m1 = m0 - fuel;
@@ -193,7 +173,7 @@ static void test_breguet_functions(void **state) {
    SAR speed at CI 0 (common practice). */
 static void test_speed_modes(void **state) {
   (void)state;
-  acp_aircraft *ac = make(PARABOLIC_JET);
+  acp_aircraft *ac = aircraft_from_text(PARABOLIC_JET);
   const double masses[] = {22000, 30000, 38000};
   for (size_t i = 0; i < 3; ++i) {
     const double m = masses[i];
@@ -241,7 +221,7 @@ static void test_speed_modes(void **state) {
    tailwind lowers the maximum-range speed (common practice). */
 static void test_demo_jet_modes(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   const double m = 36000.0, hp = 35000 * ACP_FT;
   acp_cruise_point end, mr, lrc, eco, fix, head, tail;
   assert_int_equal(acp_cruise_speed(ac, ACP_CRUISE_MAX_ENDURANCE, 0, m, hp, 0, 0, &end), ACP_OK);
@@ -282,7 +262,7 @@ static void test_demo_jet_modes(void **state) {
    order, so the change is in fact far smaller. */
 static void test_step_halving(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   const double m = 39000.0, hp = 33000 * ACP_FT;
   const int ends[] = {ACP_CRUISE_END_DISTANCE, ACP_CRUISE_END_FUEL, ACP_CRUISE_END_TIME};
   const double values[] = {1200 * ACP_NM, 4000.0, 3.0 * 3600.0};
@@ -313,7 +293,7 @@ static void test_step_halving(void **state) {
    totals; a too-small capacity gives ACP_ERR_RANGE and the count needed. */
 static void test_trace(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   const double m = 37000.0, hp = 35000 * ACP_FT, dist = 305 * ACP_NM, step = 20 * ACP_NM;
   acp_cruise_point pts[40];
   size_t count = 0;
@@ -361,7 +341,7 @@ static void test_trace(void **state) {
    the same distance; each climb is counted in the totals. */
 static void test_step_climbs(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   const double m = 39500.0, hp = 29000 * ACP_FT, dist = 1500 * ACP_NM, dh = 2000 * ACP_FT;
   acp_cruise_result flat, step;
   assert_int_equal(acp_cruise(ac, ACP_CRUISE_LONG_RANGE, 0, m, hp, 0, 0, ACP_CRUISE_END_DISTANCE,
@@ -404,7 +384,7 @@ static void test_step_climbs(void **state) {
 
 static void test_arrays(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   const double mass[] = {30000, 36000, NAN}, hp[] = {9000, 10668, 10000}, tas[] = {220, 230, 230};
   const double wind[] = {0, -20, 0};
   double sar[3], v[3], mach[3];
@@ -432,7 +412,7 @@ static void test_arrays(void **state) {
 /* Bad arguments and infeasible cruises: named statuses, NaN outputs. */
 static void test_errors(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   const double m = 36000.0, hp = 10000.0;
   double sar = 0.0;
   acp_cruise_point p;
@@ -488,7 +468,7 @@ static void test_errors(void **state) {
   assert_int_equal(acp_cruise(ac, 1, 0, 60000, 12500, 0, 0, 1, 1e5, 0, 0, &r), ACP_ERR_THRUST);
   CHECK_NAN(r.time, "NaN out");
   /* incomplete aircraft: drag only, no engines; fixed Mach without cruise_mach */
-  acp_aircraft *drag_only = make("wing_area = 30\nspan = 15\ncd0 = 0.02\noswald = 0.8\n");
+  acp_aircraft *drag_only = aircraft_from_text("wing_area = 30\nspan = 15\ncd0 = 0.02\noswald = 0.8\n");
   assert_int_equal(acp_specific_air_range(drag_only, 5000, 3000, 0, 100, 0, &sar), ACP_ERR_INVALID);
   assert_int_equal(acp_cruise_speed(drag_only, 2, 0, 5000, 3000, 0, 0, &p), ACP_ERR_INVALID);
   acp_aircraft_free(drag_only);
@@ -501,7 +481,7 @@ static void test_errors(void **state) {
 /* VMO/MMO caps of the fixed-Mach mode and limits held by the optimisers. */
 static void test_limits(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   acp_cruise_point p;
   /* Mach 0.78 at 5,000 ft is far above VMO (320 kt CAS): held at VMO */
   assert_int_equal(acp_cruise_speed(ac, ACP_CRUISE_FIXED_MACH, 0, 36000, 5000 * ACP_FT, 0, 0, &p),

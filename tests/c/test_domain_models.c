@@ -20,6 +20,7 @@
 #include <string.h>
 
 #include "check.h"
+#include "fixtures.h"
 
 #define NAN_ERR (-1) /* a scalar form's error: NaN */
 #define NOEDGE 0
@@ -56,22 +57,11 @@ static const bound FREE = {-INF, -INF, INF, INF, NOEDGE, NOEDGE};
 
 static acp_aircraft *g_jet, *g_twin, *g_plain;
 
-static acp_aircraft *load(const char *name) {
-  char path[512], err[256];
-  snprintf(path, sizeof path, "%s/aircraft/%s", ACP_EXAMPLES_DIR, name);
-  acp_aircraft *ac = acp_aircraft_new();
-  if (!ac || acp_aircraft_load(ac, path, err, sizeof err) != ACP_OK) {
-    fprintf(stderr, "cannot load %s: %s\n", path, err);
-    return NULL;
-  }
-  return ac;
-}
-
 static int setup(void **state) {
   (void)state;
   char err[128];
-  g_jet = load("regional_jet.toml");
-  g_twin = load("light_twin.toml");
+  g_jet = aircraft_from_example("regional_jet.toml");
+  g_twin = aircraft_from_example("light_twin.toml");
   g_plain = acp_aircraft_new();
   if (!g_plain || acp_aircraft_parse(g_plain, "wing_area = 40.0\nspan = 20.0\ncd0 = 0.02\noswald = 0.8\n",
                                      err, sizeof err) != ACP_OK)

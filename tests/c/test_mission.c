@@ -3,19 +3,9 @@
    iteration, rules of thumb as sanity bands (marked common practice), and
    every infeasible mission and bad argument as a named error. */
 #include "check.h"
+#include "fixtures.h"
 
 #include <acperf.h>
-
-static acp_aircraft *load_example(const char *name) {
-  char path[512], err[256];
-  snprintf(path, sizeof path, "%s/aircraft/%s", ACP_EXAMPLES_DIR, name);
-  acp_aircraft *ac = acp_aircraft_new();
-  assert_non_null(ac);
-  const int st = acp_aircraft_load(ac, path, err, sizeof err);
-  if (st != ACP_OK) print_error("%s: %s\n", path, err);
-  assert_int_equal(st, ACP_OK);
-  return ac;
-}
 
 /* The invented operator's standard sector: 500 NM at FL350. */
 static acp_mission *sector(double nm, double fl) {
@@ -77,7 +67,7 @@ static void test_mission_keys(void **state) {
    trip is the composition of the public climb, cruise and descent. */
 static void test_bookkeeping(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   acp_mission *m = sector(500, 350);
   const double zfw = 32000.0;
   acp_trip_result t;
@@ -148,7 +138,7 @@ static void test_bookkeeping(void **state) {
 /* Fuel-policy keys: alternate, contingency minimum, no final reserve, taxi fuel given. */
 static void test_policy(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   acp_mission *m = sector(400, 330);
   acp_trip_result a, b;
   assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 31000, &a), ACP_OK);
@@ -174,7 +164,7 @@ static void test_policy(void **state) {
    faster; a headwind costs fuel and time, a tailwind saves them. */
 static void test_modes_and_wind(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   acp_mission *m = sector(800, 350);
   acp_trip_result mr, lrc, eco, head, still, tail;
   assert_int_equal(acp_mission_set(m, "cruise_mode", ACP_CRUISE_MAX_RANGE), ACP_OK);
@@ -211,7 +201,7 @@ static void test_modes_and_wind(void **state) {
 /* A trip with step climbs climbs from FL310 and burns less than one without. */
 static void test_trip_step_climbs(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   acp_mission *m = sector(1200, 310);
   acp_trip_result flat, step;
   assert_int_equal(acp_mission_set(m, "cruise_mode", ACP_CRUISE_LONG_RANGE), ACP_OK);
@@ -244,7 +234,7 @@ static void check_infeasible(int st, const acp_trip_result *t, int want_st, int 
 /* Every infeasible mission is a named error with its reason and excess. */
 static void test_infeasible(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   acp_mission *m = sector(500, 350);
   acp_trip_result t;
   int st;
@@ -321,7 +311,7 @@ static void test_infeasible(void **state) {
 
 static void test_bad_arguments(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   acp_mission *m = sector(500, 350);
   acp_trip_result t;
   assert_int_equal(acp_trip(NULL, m, 36000, &t), ACP_ERR_INVALID);

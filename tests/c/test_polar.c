@@ -5,6 +5,7 @@
    of this test, independently of the library's code, and are quoted to 17
    significant digits. */
 #include "check.h"
+#include "fixtures.h"
 
 #include <string.h>
 
@@ -118,16 +119,6 @@ static void test_korn_lock(void **state) {
 
 /* ---- aircraft for the drag checks ------------------------------------------ */
 
-static acp_aircraft *make(const char *text) {
-  acp_aircraft *ac = acp_aircraft_new();
-  char err[256];
-  assert_non_null(ac);
-  const int st = acp_aircraft_parse(ac, text, err, sizeof err);
-  if (st != ACP_OK) print_error("parse: %s\n", err);
-  assert_int_equal(st, ACP_OK);
-  return ac;
-}
-
 static const char *SIMPLE = "wing_area = 30\nspan = 15\ncd0 = 0.02\noswald = 0.8\ncl_max = 1.5\n";
 
 /* One surface, evaluated by hand at sea level ISA, 100 m/s, with the ISO 2533
@@ -144,7 +135,7 @@ static const char *ONE_WING = "wing_area = 20\nspan = 12\noswald = 0.8\n"
 
 static void test_build_up_by_hand(void **state) {
   (void)state;
-  acp_aircraft *ac = make(ONE_WING);
+  acp_aircraft *ac = aircraft_from_text(ONE_WING);
   acp_component_drag c;
   assert_int_equal(acp_drag_component(ac, 0, 0.0, 0.0, 100.0, &c), ACP_OK);
   CHECK_CLOSE(c.reynolds, 13691891.3563, 0.0, 1e-9, "Re on the chord");
@@ -163,21 +154,6 @@ static void test_build_up_by_hand(void **state) {
   acp_aircraft_free(ac);
 }
 
-static const char *example_path(const char *name, char *buf, size_t len) {
-  snprintf(buf, len, "%s/aircraft/%s", ACP_EXAMPLES_DIR, name);
-  return buf;
-}
-
-static acp_aircraft *load_example(const char *name) {
-  char path[512], err[256];
-  acp_aircraft *ac = acp_aircraft_new();
-  assert_non_null(ac);
-  const int st = acp_aircraft_load(ac, example_path(name, path, sizeof path), err, sizeof err);
-  if (st != ACP_OK) print_error("%s: %s\n", path, err);
-  assert_int_equal(st, ACP_OK);
-  return ac;
-}
-
 static void test_parts_sum(void **state) {
   (void)state;
   static const char *files[] = {"regional_jet.toml", "light_twin.toml"};
@@ -186,7 +162,7 @@ static void test_parts_sum(void **state) {
                                    {30000, 7620, -10, 200},   {5000, 0, 0, 70},
                                    {5000, 7620, 0, 130},      {4000, 3000, 20, 90}};
   for (size_t f = 0; f < 2; ++f) {
-    acp_aircraft *ac = load_example(files[f]);
+    acp_aircraft *ac = aircraft_from_example(files[f]);
     for (size_t i = 0; i < sizeof cond / sizeof cond[0]; ++i) {
       acp_drag_parts d;
       acp_polar_point p;
@@ -218,7 +194,7 @@ static void test_parts_sum(void **state) {
 
 /* Change one key, compare the drag at one condition. */
 static double drag_with(const char *text, const char *key, double value, double tas) {
-  acp_aircraft *ac = make(text);
+  acp_aircraft *ac = aircraft_from_text(text);
   if (key) assert_int_equal(acp_aircraft_set(ac, key, value), ACP_OK);
   acp_drag_parts d;
   assert_int_equal(acp_drag(ac, 2000.0, 0.0, 0.0, tas, &d), ACP_OK);
@@ -254,7 +230,7 @@ static void test_what_a_change_buys(void **state) {
 
 static void test_cd0_polar(void **state) {
   (void)state;
-  acp_aircraft *ac = make(SIMPLE);
+  acp_aircraft *ac = aircraft_from_text(SIMPLE);
   acp_drag_parts d;
   acp_atmos atm;
   assert_int_equal(acp_isa(0.0, 0.0, &atm), ACP_OK);
@@ -284,7 +260,7 @@ static void test_cd0_polar(void **state) {
 
 static void test_wave_drag_in_polar(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   acp_polar_point p;
   const double hp = 11277.6, mass = 34000.0;
   /* below Mcrit: zero wave drag */
@@ -312,7 +288,7 @@ static void test_wave_drag_in_polar(void **state) {
 
 static void test_drag_curve(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("light_twin.toml");
+  acp_aircraft *ac = aircraft_from_example("light_twin.toml");
   double tas[40], par[40], ind[40], wave[40], tot[40];
   for (int i = 0; i < 40; ++i) tas[i] = 40.0 + 5.0 * i;
   assert_int_equal(acp_drag_curve(ac, 5000.0, 1500.0, 0.0, 40, tas, par, ind, wave, tot), 0);
@@ -350,7 +326,7 @@ typedef struct {
 
 static void test_bad_arguments(void **state) {
   (void)state;
-  acp_aircraft *ac = make(SIMPLE);
+  acp_aircraft *ac = aircraft_from_text(SIMPLE);
   static const bad_row rows[] = {
       {NAN, 0, 0, 80, 1, ACP_ERR_INVALID, "NaN mass"},
       {5000, NAN, 0, 80, 1, ACP_ERR_INVALID, "NaN altitude"},
@@ -394,14 +370,14 @@ static void test_bad_arguments(void **state) {
   CHECK_NAN(d.total, "incomplete aircraft");
   acp_aircraft_free(ac);
   /* a component Reynolds number below 1e3 is outside the model */
-  ac = make(ONE_WING);
+  ac = aircraft_from_text(ONE_WING);
   assert_int_equal(acp_drag(ac, 2000, 0, 0, 0.001, &d), ACP_ERR_RANGE);
   acp_aircraft_free(ac);
 }
 
 static void test_derived_keys(void **state) {
   (void)state;
-  acp_aircraft *ac = make(SIMPLE);
+  acp_aircraft *ac = aircraft_from_text(SIMPLE);
   double v;
   assert_int_equal(acp_aircraft_get(ac, "aspect_ratio", &v), ACP_OK);
   CHECK_CLOSE(v, 7.5, 0.0, 4 * EPS, "A = b^2/S");

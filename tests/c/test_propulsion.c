@@ -3,18 +3,7 @@
 #include <acperf.h>
 
 #include "check.h"
-
-static acp_aircraft *load(const char *file) {
-  char path[512], err[256];
-  snprintf(path, sizeof path, "%s/aircraft/%s", ACP_EXAMPLES_DIR, file);
-  acp_aircraft *ac = acp_aircraft_new();
-  assert_non_null(ac);
-  if (acp_aircraft_load(ac, path, err, sizeof err) != ACP_OK) {
-    print_error("%s: %s\n", path, err);
-    fail();
-  }
-  return ac;
-}
+#include "fixtures.h"
 
 /* Mattingly eq. 2.45a (high-bypass turbofan): alpha = delta0 (1 - 0.49 sqrt(M))
    below the throttle ratio, minus 3 (theta0 - TR)/(1.5 + M) above it. Hand
@@ -61,7 +50,7 @@ static void test_piston(void **state) {
    thrust with the idle flow as a floor; thrust above the maximum is an error. */
 static void test_ratings_and_fuel(void **state) {
   (void)state;
-  acp_aircraft *ac = load("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   double climb, cruise, idle, n, t0;
   acp_aircraft_get(ac, "climb_rating", &climb);
   acp_aircraft_get(ac, "cruise_rating", &cruise);
@@ -103,7 +92,7 @@ static void test_ratings_and_fuel(void **state) {
 /* Propeller: thrust = eta P/V with P = n P0 sigma^n (turboprop); fuel = psfc P. */
 static void test_turboprop(void **state) {
   (void)state;
-  acp_aircraft *ac = load("light_twin.toml");
+  acp_aircraft *ac = aircraft_from_example("light_twin.toml");
   double n, p0, expo, eta, psfc, ratio;
   acp_aircraft_get(ac, "engine_count", &n);
   acp_aircraft_get(ac, "engine_power", &p0);

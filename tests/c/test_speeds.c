@@ -5,31 +5,11 @@
    VMD (common practice) and the optimality of the numerical speeds on the
    full model. */
 #include "check.h"
+#include "fixtures.h"
 
 #include <acperf.h>
 
 #define PI 3.14159265358979323846
-
-static acp_aircraft *make(const char *text) {
-  acp_aircraft *ac = acp_aircraft_new();
-  char err[256];
-  assert_non_null(ac);
-  const int st = acp_aircraft_parse(ac, text, err, sizeof err);
-  if (st != ACP_OK) print_error("parse: %s\n", err);
-  assert_int_equal(st, ACP_OK);
-  return ac;
-}
-
-static acp_aircraft *load_example(const char *name) {
-  char path[512], err[256];
-  snprintf(path, sizeof path, "%s/aircraft/%s", ACP_EXAMPLES_DIR, name);
-  acp_aircraft *ac = acp_aircraft_new();
-  assert_non_null(ac);
-  const int st = acp_aircraft_load(ac, path, err, sizeof err);
-  if (st != ACP_OK) print_error("%s: %s\n", path, err);
-  assert_int_equal(st, ACP_OK);
-  return ac;
-}
 
 /* Parabolic polar without Reynolds or Mach effects: CD = 0.02 + k CL^2,
    k = 1/(pi 7.5 0.8). */
@@ -59,7 +39,7 @@ static const cond_row CONDS[] = {
 
 static void test_closed_forms(void **state) {
   (void)state;
-  acp_aircraft *ac = make(SIMPLE);
+  acp_aircraft *ac = aircraft_from_text(SIMPLE);
   for (size_t i = 0; i < sizeof CONDS / sizeof CONDS[0]; ++i) {
     const cond_row *c = &CONDS[i];
     acp_speed_set s;
@@ -81,7 +61,7 @@ static void test_closed_forms(void **state) {
 
 static void test_closed_form_with_cl_offset(void **state) {
   (void)state;
-  acp_aircraft *ac = make(SIMPLE);
+  acp_aircraft *ac = aircraft_from_text(SIMPLE);
   assert_int_equal(acp_aircraft_set(ac, "cl_min_drag", 0.2), ACP_OK);
   /* CD = CD0 + k (CL - CL0)^2: best L/D at CL* = sqrt(CD0/k + CL0^2),
      L/D max = 1/(2 k (CL* - CL0)) (derivation in docs/methods/drag.md) */
@@ -96,7 +76,7 @@ static void test_closed_form_with_cl_offset(void **state) {
 
 static void test_cas_mach_forms(void **state) {
   (void)state;
-  acp_aircraft *ac = make(SIMPLE);
+  acp_aircraft *ac = aircraft_from_text(SIMPLE);
   acp_speed_set t, c, m;
   assert_int_equal(acp_speeds(ac, 6000, 5000, 10, &t), ACP_OK);
   assert_int_equal(acp_speeds_cas(ac, 6000, 5000, 10, &c), ACP_OK);
@@ -123,7 +103,7 @@ static void test_optimal_on_full_model(void **state) {
   static const double cond[][3] = {{34000, 11277.6, 0}, {38000, 0, 15}, {30000, 7620, -10},
                                    {5500, 0, 0},        {5000, 7620, 0}, {4200, 3000, 20}};
   for (size_t f = 0; f < 2; ++f) {
-    acp_aircraft *ac = load_example(files[f]);
+    acp_aircraft *ac = aircraft_from_example(files[f]);
     for (size_t i = 3 * f; i < 3 * f + 3; ++i) {
       const double m = cond[i][0], hp = cond[i][1], dt = cond[i][2];
       acp_speed_set s;
@@ -149,14 +129,14 @@ static void test_optimal_on_full_model(void **state) {
     acp_aircraft_free(ac);
   }
   /* the light twin (no wave drag) keeps close to the rule of thumb */
-  acp_aircraft *ac = load_example("light_twin.toml");
+  acp_aircraft *ac = aircraft_from_example("light_twin.toml");
   acp_speed_set s;
   assert_int_equal(acp_speeds(ac, 5000, 0, 0, &s), ACP_OK);
   CHECK_CLOSE(s.vmr / s.vmd, 1.32, 0.03, 0.0, "light twin VMR about 1.32 VMD (common practice)");
   acp_aircraft_free(ac);
   /* the regional jet at cruise altitude: wave drag holds VMR below the
      parabolic 1.316 VMD and below the drag-divergence Mach */
-  ac = load_example("regional_jet.toml");
+  ac = aircraft_from_example("regional_jet.toml");
   acp_speed_set mach;
   assert_int_equal(acp_speeds(ac, 34000, 11277.6, 0, &s), ACP_OK);
   assert_int_equal(acp_speeds_mach(ac, 34000, 11277.6, 0, &mach), ACP_OK);
@@ -184,7 +164,7 @@ static double min_sink_scan(double *cl_best) {
 
 static void test_glide(void **state) {
   (void)state;
-  acp_aircraft *ac = make(SIMPLE);
+  acp_aircraft *ac = aircraft_from_text(SIMPLE);
   acp_glide_set g;
   acp_speed_set s;
   assert_int_equal(acp_glide(ac, 5000, 2000, 0, &g), ACP_OK);
@@ -218,7 +198,7 @@ static void test_glide(void **state) {
 
 static void test_speed_stability(void **state) {
   (void)state;
-  acp_aircraft *ac = load_example("regional_jet.toml");
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
   acp_speed_set s;
   assert_int_equal(acp_speeds(ac, 30000, 3000, 0, &s), ACP_OK);
   acp_stability st;
@@ -259,7 +239,7 @@ static void test_speed_stability(void **state) {
 
 static void test_boundary_arrays(void **state) {
   (void)state;
-  acp_aircraft *ac = make(SIMPLE);
+  acp_aircraft *ac = aircraft_from_text(SIMPLE);
   /* boundary over masses and altitudes: the closed form of VMD */
   const double mass[6] = {4000, 5000, 6000, 4000, 5000, NAN};
   const double hp[6] = {0, 3000, 10000, 10000, 90000, 0};
@@ -293,7 +273,7 @@ static void test_boundary_arrays(void **state) {
 
 static void test_errors(void **state) {
   (void)state;
-  acp_aircraft *ac = make(SIMPLE);
+  acp_aircraft *ac = aircraft_from_text(SIMPLE);
   acp_speed_set s;
   assert_int_equal(acp_speeds(NULL, 5000, 0, 0, &s), ACP_ERR_INVALID);
   CHECK_NAN(s.vmd, "NULL aircraft");

@@ -1,0 +1,31 @@
+/* Aircraft models for the cmocka tests: from text, or from the invented demo
+   files in examples/aircraft (ACP_EXAMPLES_DIR). Fail the test on any error. */
+#ifndef ACPERF_TEST_FIXTURES_H
+#define ACPERF_TEST_FIXTURES_H
+
+#include <acperf.h>
+
+#include "check.h"
+
+static inline acp_aircraft *aircraft_from_text(const char *text) {
+  acp_aircraft *ac = acp_aircraft_new();
+  char err[256];
+  assert_non_null(ac);
+  const int st = acp_aircraft_parse(ac, text, err, sizeof err);
+  if (st != ACP_OK) print_error("parse: %s\n", err);
+  assert_int_equal(st, ACP_OK);
+  return ac;
+}
+
+static inline acp_aircraft *aircraft_from_example(const char *name) {
+  char path[512], err[256];
+  snprintf(path, sizeof path, "%s/aircraft/%s", ACP_EXAMPLES_DIR, name);
+  acp_aircraft *ac = acp_aircraft_new();
+  assert_non_null(ac);
+  const int st = acp_aircraft_load(ac, path, err, sizeof err);
+  if (st != ACP_OK) print_error("%s: %s\n", path, err);
+  assert_int_equal(st, ACP_OK);
+  return ac;
+}
+
+#endif /* ACPERF_TEST_FIXTURES_H */
