@@ -10,6 +10,7 @@
 #include "acperf/friction.h"
 #include "acperf/status.h"
 #include "aircraft_internal.h"
+#include "friction_internal.h"
 #include "internal.h"
 
 #define PI 3.14159265358979323846
@@ -128,18 +129,18 @@ int polar_derived_value(const acp_aircraft *ac, const char *key, double *value) 
 /* Cf, FF, Q and Reynolds number of one component; ACP_ERR_RANGE when Cf
    cannot be had (Reynolds number outside 1e3 to 1e10). */
 static int component_factors(const ac_component *c, const acp_atmos *atm, double tas,
-                             double mach, acp_component_drag *cd) {
+                             const friction_mach *fm, acp_component_drag *cd) {
   const double length = comp_value(c, CK_LENGTH);
   const double re = atm->density * tas * length / atm->dynamic_viscosity;
-  const double cf = acp_skin_friction(re, mach, comp_value(c, CK_LAMINAR_FRACTION), length,
-                                      comp_value(c, CK_ROUGHNESS));
+  const double cf = friction_skin(re, fm, comp_value(c, CK_LAMINAR_FRACTION), length,
+                                  comp_value(c, CK_ROUGHNESS));
   double ff = c->v[CK_FORM_FACTOR];
   if (isnan(ff)) {
     switch ((int)c->v[CK_TYPE]) {
     case ACP_COMPONENT_SURFACE:
-      ff = acp_form_factor_surface(comp_value(c, CK_THICKNESS_RATIO),
-                                   comp_value(c, CK_MAX_THICKNESS_POSITION),
-                                   comp_value(c, CK_SWEEP_MAX_THICKNESS), mach);
+      ff = friction_form_surface(comp_value(c, CK_THICKNESS_RATIO),
+                                 comp_value(c, CK_MAX_THICKNESS_POSITION),
+                                 comp_value(c, CK_SWEEP_MAX_THICKNESS), fm);
       break;
     case ACP_COMPONENT_BODY: ff = acp_form_factor_body(comp_value(c, CK_FINENESS_RATIO)); break;
     case ACP_COMPONENT_NACELLE:
@@ -188,9 +189,11 @@ int polar_eval(const acp_aircraft *ac, const acp_atmos *atm, double lift, double
     cd0 = ac->v[AK_CD0];
   } else {
     double fr = 0.0, fo = 0.0, in = 0.0;
+    friction_mach fm; /* the Mach factors once for all components */
+    friction_mach_init(mach, &fm);
     for (size_t i = 0; i < ac->ncomp; ++i) {
       acp_component_drag cd;
-      if (component_factors(&ac->comp[i], atm, tas, mach, &cd) != ACP_OK) return ACP_ERR_RANGE;
+      if (component_factors(&ac->comp[i], atm, tas, &fm, &cd) != ACP_OK) return ACP_ERR_RANGE;
       fr += cd.friction;
       fo += cd.form;
       in += cd.interference;
@@ -316,7 +319,9 @@ int acp_drag_component(const acp_aircraft *ac, size_t index, double hp, double d
   const double mach = tas / atm.sound_speed;
   if (!(mach <= ACP_POLAR_MACH_MAX)) return ACP_ERR_RANGE;
   acp_component_drag cd;
-  if (component_factors(&ac->comp[index], &atm, tas, mach, &cd) != ACP_OK) return ACP_ERR_RANGE;
+  friction_mach fm;
+  friction_mach_init(mach, &fm);
+  if (component_factors(&ac->comp[index], &atm, tas, &fm, &cd) != ACP_OK) return ACP_ERR_RANGE;
   const double q = 0.5 * atm.density * tas * tas;
   cd.friction *= q;
   cd.form *= q;
