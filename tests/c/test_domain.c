@@ -12,45 +12,7 @@
    ("NAN_ERR"). Point checks then cover what a per-argument interval cannot
    (zero or negative where the error changes kind, NULL pointers, array
    forms), and the regressions found by fuzzing (tests/reliability). */
-#include <acperf.h>
-#include <float.h>
-#include <string.h>
-
-#include "check.h"
-
-#define NAN_ERR (-1) /* a scalar form's error: NaN */
-#define NOEDGE 0     /* no edge on this side */
-#define INF ((double)INFINITY)
-
-typedef struct {
-  double in_lo, out_lo, in_hi, out_hi; /* +-INF: no edge on that side */
-  int below, above;                    /* status just outside each edge */
-} bound;
-
-typedef int (*call_fn)(const double *x, double *out);
-
-typedef struct {
-  const char *fn;
-  call_fn call;
-  int scalar; /* 1: NaN-returning form */
-  int nargs;
-  double nominal[5];
-  bound b[5];
-} row;
-
-static double down(double x) { return nextafter(x, -INF); }
-static double up(double x) { return nextafter(x, INF); }
-/* [lo, hi], the next double outside is an error e. */
-static bound closed(double lo, double hi, int e) { return (bound){lo, down(lo), hi, up(hi), e, e}; }
-/* (0, inf): 0 is an error e. */
-static bound positive(int e) { return (bound){DBL_TRUE_MIN, 0.0, INF, INF, e, NOEDGE}; }
-/* [0, inf). */
-static bound nonnegative(int e) { return (bound){0.0, -DBL_TRUE_MIN, INF, INF, e, NOEDGE}; }
-/* Result-range edges: outside by a relative step. */
-static bound rel(double lo, double hi, double step, int e) {
-  return (bound){lo, lo - step * fabs(lo), hi, hi + step * fabs(hi), e, e};
-}
-static const bound FREE = {-INF, -INF, INF, INF, NOEDGE, NOEDGE};
+#include "domain.h"
 
 /* ---- wrappers: status forms return their status, scalar forms NAN_ERR ---- */
 #define SCALAR1(f) static int w_##f(const double *x, double *o) { *o = f(x[0]); return isnan(*o) ? NAN_ERR : ACP_OK; }
@@ -140,38 +102,7 @@ static int expect(const row *r, const double *x, int want, const char *what, int
   return ok;
 }
 
-static int check_row(const row *r) {
-  int ok = 1;
-  double x[5];
-  memcpy(x, r->nominal, sizeof x);
-  ok &= expect(r, x, ACP_OK, "nominal", 0);
-  const int invalid = r->scalar ? NAN_ERR : ACP_ERR_INVALID;
-  for (int i = 0; i < r->nargs; ++i) {
-    const bound *b = &r->b[i];
-    const double probes[5] = {b->in_lo, b->out_lo, b->in_hi, b->out_hi, 0};
-    const int wants[4] = {ACP_OK, r->scalar ? NAN_ERR : b->below, ACP_OK,
-                          r->scalar ? NAN_ERR : b->above};
-    const char *what[4] = {"at the lower edge", "just below it", "at the upper edge",
-                           "just above it"};
-    for (int k = 0; k < 4; ++k) {
-      if (isinf(probes[k & 2 ? 2 : 0])) continue; /* no edge on this side */
-      memcpy(x, r->nominal, sizeof x);
-      x[i] = probes[k];
-      ok &= expect(r, x, wants[k], what[k], i);
-    }
-    const double bad[3] = {NAN, INF, -INF};
-    const char *bad_what[3] = {"NaN", "+Inf", "-Inf"};
-    for (int k = 0; k < 3; ++k) {
-      memcpy(x, r->nominal, sizeof x);
-      x[i] = bad[k];
-      ok &= expect(r, x, invalid, bad_what[k], i);
-    }
-  }
-  return ok;
-}
-
 #define ROW(f, scalar, n, nom, ...) {#f, w_##f, scalar, n, nom, {__VA_ARGS__}}
-#define NOM(...) {__VA_ARGS__}
 
 static void test_edges(void **state) {
   (void)state;

@@ -14,46 +14,12 @@
    on it. Status forms are checked to give every output NaN on error and
    finite outputs on success. Aircraft: the demo aircraft of examples/ and a
    plain cd0 aircraft (the polar's edges without a Reynolds range). */
-#include <acperf.h>
-#include <float.h>
 #include <stdio.h>
-#include <string.h>
 
-#include "check.h"
+#include "domain.h"
 #include "fixtures.h"
 
-#define NAN_ERR (-1) /* a scalar form's error: NaN */
-#define NOEDGE 0
-#define INF ((double)INFINITY)
 #define DEG (3.14159265358979323846 / 180.0)
-#define MAXARGS 8
-
-typedef struct {
-  double in_lo, out_lo, in_hi, out_hi; /* +-INF: no edge; in NaN: probe outside only */
-  int below, above;
-} bound;
-
-typedef int (*call_fn)(const double *x, double *out);
-
-typedef struct {
-  const char *fn;
-  call_fn call;
-  int scalar;
-  int nargs;
-  double nominal[MAXARGS];
-  bound b[MAXARGS];
-} row;
-
-static double down(double x) { return nextafter(x, -INF); }
-static double up(double x) { return nextafter(x, INF); }
-static bound closed(double lo, double hi, int e) { return (bound){lo, down(lo), hi, up(hi), e, e}; }
-static bound positive(int e) { return (bound){DBL_TRUE_MIN, 0.0, INF, INF, e, NOEDGE}; }
-static bound nonnegative(int e) { return (bound){0.0, -DBL_TRUE_MIN, INF, INF, e, NOEDGE}; }
-/* Outside only: just below lo is e_lo, just above hi is e_hi. */
-static bound out(double lo, int e_lo, double hi, int e_hi) {
-  return (bound){NAN, down(lo), NAN, up(hi), e_lo, e_hi};
-}
-static const bound FREE = {-INF, -INF, INF, INF, NOEDGE, NOEDGE};
 
 static acp_aircraft *g_jet, *g_twin, *g_plain;
 
@@ -235,38 +201,7 @@ static int expect(const row *r, const double *x, int want, const char *what, int
   return ok;
 }
 
-static int check_row(const row *r) {
-  int ok = 1;
-  double x[MAXARGS];
-  memcpy(x, r->nominal, sizeof x);
-  ok &= expect(r, x, ACP_OK, "nominal", 0);
-  const int invalid = r->scalar ? NAN_ERR : ACP_ERR_INVALID;
-  for (int i = 0; i < r->nargs; ++i) {
-    const bound *b = &r->b[i];
-    const double probes[4] = {b->in_lo, b->out_lo, b->in_hi, b->out_hi};
-    const int wants[4] = {ACP_OK, r->scalar ? NAN_ERR : b->below, ACP_OK,
-                          r->scalar ? NAN_ERR : b->above};
-    const char *what[4] = {"at the lower edge", "just below it", "at the upper edge",
-                           "just above it"};
-    for (int k = 0; k < 4; ++k) {
-      if (isinf(probes[k & 2 ? 2 : 0]) || isinf(probes[k]) || isnan(probes[k])) continue;
-      memcpy(x, r->nominal, sizeof x);
-      x[i] = probes[k];
-      ok &= expect(r, x, wants[k], what[k], i);
-    }
-    const double bad[3] = {NAN, INF, -INF};
-    const char *bad_what[3] = {"NaN", "+Inf", "-Inf"};
-    for (int k = 0; k < 3; ++k) {
-      memcpy(x, r->nominal, sizeof x);
-      x[i] = bad[k];
-      ok &= expect(r, x, invalid, bad_what[k], i);
-    }
-  }
-  return ok;
-}
-
 #define ROW(f, w, scalar, n, nom, ...) {#f, w, scalar, n, nom, {__VA_ARGS__}}
-#define NOM(...) {__VA_ARGS__}
 
 static void test_edges(void **state) {
   (void)state;
