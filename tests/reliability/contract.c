@@ -1,6 +1,8 @@
 /* Shared machinery of the reliability contract (see contract.h). */
 #include "contract.h"
 
+#include <stdlib.h>
+
 #include <math.h>
 #include <stdarg.h>
 #include <stdio.h>
@@ -265,4 +267,23 @@ void contract_run_models(contract *c) {
 #include "contract_modules.h"
 #undef CONTRACT_MODULE
 #undef CONTRACT_MODEL
+}
+
+/* A fuzz target's violation handler: ACPERF_FUZZ_KEEP_GOING=1 reports each kind
+   of violation once and goes on (for surveying a new module); otherwise the first
+   violation aborts, which libFuzzer reports as a crash. */
+void contract_fuzz_violation(contract *c, const char *message) {
+  (void)c;
+  static char seen[64][48];
+  static int nseen = -1;
+  if (nseen < 0) nseen = getenv("ACPERF_FUZZ_KEEP_GOING") ? 0 : 64;
+  if (nseen >= 64) {
+    fprintf(stderr, "contract violation: %s\n", message);
+    abort();
+  }
+  for (int i = 0; i < nseen; ++i)
+    if (strncmp(seen[i], message, 40) == 0) return;
+  strncpy(seen[nseen], message, 40);
+  seen[nseen++][40] = '\0';
+  fprintf(stderr, "contract violation: %s\n", message);
 }

@@ -67,6 +67,10 @@ const acp_aircraft *contract_some_aircraft(contract *c, acp_aircraft **own);
 /* Record an output for the bitwise comparisons of the thread test. */
 void contract_record(contract *c, double v);
 
+/* Violation handler of the fuzz targets: abort on the first violation, or with
+   ACPERF_FUZZ_KEEP_GOING=1 report each kind once and go on. */
+void contract_fuzz_violation(contract *c, const char *message);
+
 /* Report a violation (printf-style message, prefixed by the function name). */
 void contract_violation(contract *c, const char *fn, const char *fmt, ...)
 #if defined(__GNUC__)

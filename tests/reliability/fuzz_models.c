@@ -20,21 +20,6 @@
 
 static unsigned g_sample = 8;
 
-static void on_violation(contract *c, const char *message) {
-  (void)c;
-  static char seen[64][48];
-  static int nseen = -1;
-  if (nseen < 0) nseen = getenv("ACPERF_FUZZ_KEEP_GOING") ? 0 : 64;
-  if (nseen >= 64) {
-    fprintf(stderr, "contract violation: %s\n", message);
-    abort();
-  }
-  for (int i = 0; i < nseen; ++i)
-    if (strncmp(seen[i], message, 40) == 0) return;
-  strncpy(seen[nseen], message, 40);
-  seen[nseen++][40] = '\0';
-  fprintf(stderr, "contract violation: %s\n", message);
-}
 
 int LLVMFuzzerInitialize(int *argc, char ***argv);
 int LLVMFuzzerTestOneInput(const uint8_t *data, size_t size);
@@ -53,7 +38,7 @@ int LLVMFuzzerTestOneInput(const uint8_t *data, size_t size) {
   uint32_t choice;
   const size_t n = decode_doubles(data, size, args, CONTRACT_MAX_ARGS, &choice);
   contract c;
-  contract_init(&c, args, n, choice, NULL, 0, on_violation);
+  contract_init(&c, args, n, choice, NULL, 0, contract_fuzz_violation);
   c.sample = g_sample;
   contract_run_models(&c);
   return 0;
