@@ -107,12 +107,16 @@ def from_si(value, unit):
 _PLAIN = {"m/s", "km/h", "ft/min", "kg/s", "kg/h", "lb/h"}
 
 
-class Aircraft:
-    """The model built from a two-column key/value range; freed on close."""
+class _RangeModel:
+    """A C model (aircraft, mission) built from a two-column key/value range;
+    freed on close. Subclasses name the C constructor and destructor and set
+    one key from one row."""
+
+    what = "range"
 
     def __init__(self, rng):
         rng = rng if isinstance(rng, tuple) else ((rng,),)
-        self.ptr = capi.acp_aircraft_new()
+        self.ptr = self._new()
         try:
             self._fill(rng)
         except BaseException:
@@ -121,78 +125,72 @@ class Aircraft:
 
     def _fill(self, rng):
         if any(len(row) != 2 for row in rng):
-            raise InvalidInput("the aircraft range must have exactly two columns: key, value")
+            raise InvalidInput(f"the {self.what} range must have exactly two columns: key, value")
         given = 0
         for i, (key, value) in enumerate(rng, start=1):
             if _blank(key) and _blank(value):
                 continue  # an empty row of the range: room for more keys
             if not isinstance(key, str) or not key.strip():
-                raise InvalidInput(f"aircraft range row {i}: the key must be text")
-            key = key.strip()
-            try:
-                if key in _TEXT_KEYS or (key.startswith("component.") and key.endswith(".type")):
-                    if _blank(value) or not isinstance(value, str) or not value.strip():
-                        raise InvalidInput(f"aircraft range row {i}: '{key}' needs a text value")
-                    capi.acp_aircraft_set_text(self.ptr, key, value.strip())
-                else:
-                    capi.acp_aircraft_set(self.ptr, key, number(value, f"aircraft range row {i} '{key}'"))
-            except capi.AcperfError as e:
-                raise InvalidInput(f"aircraft range row {i}: {e}") from None
+                raise InvalidInput(f"{self.what} range row {i}: the key must be text")
+            self._set(i, key.strip(), value)
             given += 1
         if not given:
-            raise InvalidInput("the aircraft range is empty")
+            raise InvalidInput(f"the {self.what} range is empty")
+        self._check()
+
+    def _check(self):
+        pass
+
+    def close(self):
+        if self.ptr is not None:
+            self._free(self.ptr)
+            self.ptr = None
+
+
+class Aircraft(_RangeModel):
+    """The aircraft model built from a two-column key/value range."""
+
+    what = "aircraft"
+    _new = staticmethod(capi.acp_aircraft_new)
+    _free = staticmethod(capi.acp_aircraft_free)
+
+    def _set(self, i, key, value):
+        try:
+            if key in _TEXT_KEYS or (key.startswith("component.") and key.endswith(".type")):
+                if _blank(value) or not isinstance(value, str) or not value.strip():
+                    raise InvalidInput(f"aircraft range row {i}: '{key}' needs a text value")
+                capi.acp_aircraft_set_text(self.ptr, key, value.strip())
+            else:
+                capi.acp_aircraft_set(self.ptr, key, number(value, f"aircraft range row {i} '{key}'"))
+        except capi.AcperfError as e:
+            raise InvalidInput(f"aircraft range row {i}: {e}") from None
+
+    def _check(self):
         try:
             capi.acp_aircraft_check(self.ptr)
         except capi.AcperfError as e:
             raise InvalidInput(str(e)) from None
 
-    def close(self):
-        if self.ptr is not None:
-            capi.acp_aircraft_free(self.ptr)
-            self.ptr = None
 
-
-class Mission:
+class Mission(_RangeModel):
     """The mission built from a two-column key/value range (keys of
-    MISSION_KEYS in operations units, converted to SI); freed on close."""
+    MISSION_KEYS in operations units, converted to SI)."""
 
-    def __init__(self, rng):
-        rng = rng if isinstance(rng, tuple) else ((rng,),)
-        self.ptr = capi.acp_mission_new()
+    what = "mission"
+    _new = staticmethod(capi.acp_mission_new)
+    _free = staticmethod(capi.acp_mission_free)
+
+    def _set(self, i, key, value):
+        if key not in MISSION_KEYS:
+            raise InvalidInput(f"mission range row {i}: unknown key '{key}'")
+        if key == "cruise_mode" and isinstance(value, str) and not _blank(value):
+            value = _enum(value, CRUISE_MODES, "cruise_mode")
+        else:
+            value = to_si(number(value, f"mission range row {i} '{key}'"), MISSION_KEYS[key])
         try:
-            self._fill(rng)
-        except BaseException:
-            self.close()
-            raise
-
-    def _fill(self, rng):
-        if any(len(row) != 2 for row in rng):
-            raise InvalidInput("the mission range must have exactly two columns: key, value")
-        given = 0
-        for i, (key, value) in enumerate(rng, start=1):
-            if _blank(key) and _blank(value):
-                continue
-            if not isinstance(key, str) or not key.strip():
-                raise InvalidInput(f"mission range row {i}: the key must be text")
-            key = key.strip()
-            if key not in MISSION_KEYS:
-                raise InvalidInput(f"mission range row {i}: unknown key '{key}'")
-            if key == "cruise_mode" and isinstance(value, str) and not _blank(value):
-                value = _enum(value, CRUISE_MODES, "cruise_mode")
-            else:
-                value = to_si(number(value, f"mission range row {i} '{key}'"), MISSION_KEYS[key])
-            try:
-                capi.acp_mission_set(self.ptr, key, value)
-            except capi.AcperfError as e:
-                raise InvalidInput(f"mission range row {i}: {e}") from None
-            given += 1
-        if not given:
-            raise InvalidInput("the mission range is empty")
-
-    def close(self):
-        if self.ptr is not None:
-            capi.acp_mission_free(self.ptr)
-            self.ptr = None
+            capi.acp_mission_set(self.ptr, key, value)
+        except capi.AcperfError as e:
+            raise InvalidInput(f"mission range row {i}: {e}") from None
 
 
 def _enum(value, names, what):
