@@ -1,4 +1,5 @@
-/* Shared helpers for the cmocka tests: tolerance checks that print both values. */
+/* Shared helpers for the cmocka tests: tolerance checks that print both values.
+   No check values live here: each test names the source of its values beside them. */
 #ifndef ACPERF_TEST_CHECK_H
 #define ACPERF_TEST_CHECK_H
 

@@ -1,5 +1,7 @@
 /* Aircraft models for the cmocka tests: from text, or from the invented demo
-   files in examples/aircraft (ACP_EXAMPLES_DIR). Fail the test on any error. */
+   files in examples/aircraft (ACP_EXAMPLES_DIR). Fail the test on any error.
+   No check values here: the invented aircraft are demo data, and each test names
+   the source (closed form, handbook formula, common practice) of what it checks. */
 #ifndef ACPERF_TEST_FIXTURES_H
 #define ACPERF_TEST_FIXTURES_H
 
