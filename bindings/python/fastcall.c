@@ -2,15 +2,23 @@
  * acperf._fast: the scalar fast path of the Pythonic functions.
  *
  * A `acperf._fast.function` is a callable C object that stands for one public
- * function of the package (acperf.cas_to_mach, ...). Called with positional
- * Python floats or ints only (what SWIG's double typemap accepts: float, int
- * and their subclasses such as numpy.float64 and bool), it converts them, calls
- * the C function through a one-line trampoline (generated from the headers by
- * gen_fastcall.py into fastcall_table.h) and returns a float or the named result
- * of the Python layer. Any other call (keywords, arrays, lists, Series, numpy
- * integer scalars, wrong argument counts, ints too large for a double) goes,
- * unchanged, to the Python function it was made from (`__wrapped__`), which has
- * the array path and the argument errors. No Python frame runs on the fast path.
+ * function of the package (acperf.cas_to_mach, acperf.drag, ...). Called with
+ * scalars only, by position or by keyword: Python floats or ints for the
+ * numbers (what SWIG's double typemap accepts: float, int and their subclasses
+ * such as numpy.float64 and bool; enum parameters such as `rating` as arrays.i
+ * takes them) and acperf.Aircraft / acperf.Mission objects for the models, it
+ * converts them, calls the C function through a one-line trampoline (generated
+ * from the headers by gen_fastcall.py into fastcall_table.h) and returns a
+ * float or the named result of the Python layer. Any other call (arrays, lists,
+ * Series, numpy integer scalars, raw SWIG handles, unknown or repeated
+ * keywords, wrong argument counts, ints too large for a double) goes, unchanged,
+ * to the Python function it was made from (`__wrapped__`), which has the array
+ * path and the argument errors. No Python frame runs on the fast path.
+ *
+ * Models: acperf.Aircraft and acperf.Mission derive from `acperf._fast.model`,
+ * which holds the C address of their SWIG handle (set by `_attach`, cleared by
+ * `_detach` before the handle is freed) and its kind ('A' or 'M'), so a model
+ * argument costs a type check and a load.
  *
  * A failed call raises acperf.AcperfError with the message and `status` the
  * SWIG layer gives (errors.i: "<C name><arguments>: <status text>"; the
@@ -28,12 +36,21 @@
 
 enum { ACPF_PLAIN, ACPF_NAN, ACPF_STATUS };
 #define ACPF_MAX_IN 16
-#define ACPF_MAX_OUT 16
+#define ACPF_MAX_OUT 32
+
+/* One input of a trampoline, by type code: 'd' number, 'e' enumeration,
+   'A' / 'M' model (aircraft, mission). */
+typedef union {
+  double number;
+  int enumeration;
+  const void *model;
+} acpf_value;
 
 typedef struct {
   const char *name;                         /* C name, as SWIG shows it in errors */
+  const char *types;                        /* type code of each input */
   int nin, nout, kind;                      /* kind: ACPF_PLAIN, ACPF_NAN, ACPF_STATUS */
-  int (*call)(const double *in, double *out); /* status (0 for double functions) */
+  int (*call)(const acpf_value *in, double *out); /* status (0 for double functions) */
   const char *const *outputs;               /* output names (out-pointers, struct fields) */
 } acpf_entry;
 
@@ -41,10 +58,64 @@ typedef struct {
 
 static PyObject *acpf_error = NULL; /* acperf.AcperfError, given by _core.py */
 
+/* ---- models: the base type of acperf.Aircraft and acperf.Mission ---- */
+
+typedef struct {
+  PyObject_HEAD
+  const void *address; /* the C object of the SWIG handle; NULL when detached */
+  char kind;           /* 'A' aircraft, 'M' mission, 0 when detached */
+} acpf_model;
+
+/* _attach(handle, kind): remember the C address of a SWIG handle (its int()). */
+static PyObject *acpf_model_attach(PyObject *self, PyObject *args) {
+  PyObject *handle;
+  int kind;
+  if (!PyArg_ParseTuple(args, "OC:_attach", &handle, &kind)) return NULL;
+  if (kind != 'A' && kind != 'M') return PyErr_Format(PyExc_ValueError, "_attach: kind 'A' or 'M'");
+  PyObject *number = PyNumber_Long(handle); /* SwigPyObject: int() is its address */
+  if (!number) return NULL;
+  void *address = PyLong_AsVoidPtr(number);
+  Py_DECREF(number);
+  if (!address) return PyErr_Occurred() ? NULL : PyErr_Format(PyExc_ValueError, "_attach: NULL handle");
+  acpf_model *m = (acpf_model *)self;
+  m->address = address;
+  m->kind = (char)kind;
+  Py_RETURN_NONE;
+}
+
+/* _detach(): forget the address, before the handle is freed. */
+static PyObject *acpf_model_detach(PyObject *self, PyObject *unused) {
+  (void)unused;
+  acpf_model *m = (acpf_model *)self;
+  m->address = NULL;
+  m->kind = 0;
+  Py_RETURN_NONE;
+}
+
+static PyMethodDef acpf_model_methods[] = {
+    {"_attach", acpf_model_attach, METH_VARARGS,
+     "_attach(handle, kind): the C address of the SWIG handle, kind 'A' or 'M'."},
+    {"_detach", acpf_model_detach, METH_NOARGS, "_detach(): before the handle is freed."},
+    {NULL, NULL, 0, NULL},
+};
+
+static PyTypeObject acpf_model_type = {
+    PyVarObject_HEAD_INIT(NULL, 0)
+    .tp_name = "acperf._fast.model",
+    .tp_doc = "Base of the model objects (Aircraft, Mission): their C address for the fast path.",
+    .tp_basicsize = sizeof(acpf_model),
+    .tp_flags = Py_TPFLAGS_DEFAULT | Py_TPFLAGS_BASETYPE,
+    .tp_new = PyType_GenericNew,
+    .tp_methods = acpf_model_methods,
+};
+
+/* ---- functions ---- */
+
 typedef struct {
   PyObject_HEAD
   const acpf_entry *entry;
   PyObject *fallback;  /* the Python function: anything not all-scalar goes there */
+  PyObject *names;     /* tuple of the parameter names (interned), for keywords */
   PyObject *defaults;  /* tuple of the default objects of the trailing parameters */
   PyObject *result;    /* named result type (a tuple subtype) or NULL: one float */
   int nmin;            /* arguments without a default */
@@ -52,10 +123,16 @@ typedef struct {
   vectorcallfunc vectorcall;
 } acpf_function;
 
+/* How SWIG shows an argument in an error: a model as its SWIG handle. */
+static PyObject *acpf_shown(const acpf_entry *e, int i, PyObject *v) {
+  if (e->types[i] == 'A' || e->types[i] == 'M') return PyObject_GetAttrString(v, "_handle");
+  return Py_NewRef(v);
+}
+
 /* errors.i's acpy_raise_call: "<function><arguments>: <status text>"; one argument
-   shows as "(x)" (SWIG's METH_O), several as the tuple's repr. */
-static void acpf_raise(const acpf_function *f, PyObject *const *args, Py_ssize_t nargs,
-                       int status) {
+   shows as "(x)" (SWIG's METH_O), several as the tuple's repr. argv holds every
+   parameter in order, defaults included. */
+static void acpf_raise(const acpf_function *f, PyObject *const *argv, int status) {
   const acpf_entry *e = f->entry;
   char text[96];
   if (status < 0)
@@ -63,20 +140,19 @@ static void acpf_raise(const acpf_function *f, PyObject *const *args, Py_ssize_t
                   acp_strerror(ACP_ERR_RANGE));
   else
     PyOS_snprintf(text, sizeof text, "%s", acp_strerror(status));
-  PyObject *shown;
-  if (e->nin == 1) {
-    shown = PyUnicode_FromFormat("(%R)", args[0]);
-  } else {
-    PyObject *all = PyTuple_New(e->nin);
-    if (!all) return;
-    for (Py_ssize_t i = 0; i < e->nin; i++) {
-      PyObject *v = i < nargs ? args[i] : PyTuple_GET_ITEM(f->defaults, i - f->nmin);
-      Py_INCREF(v);
-      PyTuple_SET_ITEM(all, i, v);
+  PyObject *all = PyTuple_New(e->nin);
+  if (!all) return;
+  for (int i = 0; i < e->nin; i++) {
+    PyObject *v = acpf_shown(e, i, argv[i]);
+    if (!v) {
+      Py_DECREF(all);
+      return;
     }
-    shown = PyObject_Repr(all);
-    Py_DECREF(all);
+    PyTuple_SET_ITEM(all, i, v);
   }
+  PyObject *shown = e->nin == 1 ? PyUnicode_FromFormat("(%R)", PyTuple_GET_ITEM(all, 0))
+                                : PyObject_Repr(all);
+  Py_DECREF(all);
   if (!shown) return;
   PyObject *message = PyUnicode_FromFormat("%s%U: %s", e->name, shown, text);
   Py_DECREF(shown);
@@ -109,21 +185,69 @@ static inline int acpf_double(PyObject *o, double *v) {
   return 0;
 }
 
+/* One argument by its type code; 0 when the fast path cannot take it. */
+static inline int acpf_convert(char type, PyObject *o, acpf_value *v) {
+  switch (type) {
+    case 'd':
+      return acpf_double(o, &v->number);
+    case 'e': { /* arrays.i: a whole real number, else -1 (refused by the C function) */
+      double x;
+      if (!acpf_double(o, &x)) return 0;
+      v->enumeration = (isfinite(x) && x == floor(x) && fabs(x) < 1.0e9) ? (int)x : -1;
+      return 1;
+    }
+    default: { /* 'A', 'M': an attached model of that kind */
+      if (!PyObject_TypeCheck(o, &acpf_model_type)) return 0;
+      const acpf_model *m = (const acpf_model *)o;
+      v->model = m->address;
+      return m->kind == type && m->address != NULL;
+    }
+  }
+}
+
+/* The arguments in parameter order (argv, borrowed): positional, then keywords,
+   then defaults; 0 when a keyword is unknown or repeated or a parameter is
+   missing (the Python function reports it). */
+static int acpf_gather(const acpf_function *f, PyObject *const *args, Py_ssize_t nargs,
+                       PyObject *kwnames, PyObject **argv) {
+  const acpf_entry *e = f->entry;
+  if (nargs > e->nin) return 0;
+  for (Py_ssize_t i = 0; i < nargs; i++) argv[i] = args[i];
+  for (Py_ssize_t i = nargs; i < e->nin; i++) argv[i] = NULL;
+  const Py_ssize_t nkw = kwnames ? PyTuple_GET_SIZE(kwnames) : 0;
+  for (Py_ssize_t k = 0; k < nkw; k++) {
+    PyObject *key = PyTuple_GET_ITEM(kwnames, k);
+    Py_ssize_t i = nargs;
+    while (i < e->nin && PyTuple_GET_ITEM(f->names, i) != key) i++;
+    if (i == e->nin) /* not interned alike: compare the text */
+      for (i = nargs; i < e->nin && PyUnicode_Compare(PyTuple_GET_ITEM(f->names, i), key) != 0;)
+        i++;
+    if (i == e->nin || argv[i]) return 0;
+    argv[i] = args[nargs + k];
+  }
+  for (Py_ssize_t i = nargs; i < e->nin; i++) {
+    if (argv[i]) continue;
+    if (i < f->nmin) return 0;
+    argv[i] = PyTuple_GET_ITEM(f->defaults, i - f->nmin);
+  }
+  return 1;
+}
+
 static PyObject *acpf_call(PyObject *self, PyObject *const *args, size_t nargsf,
                            PyObject *kwnames) {
   acpf_function *f = (acpf_function *)self;
   const acpf_entry *e = f->entry;
   const Py_ssize_t nargs = PyVectorcall_NARGS(nargsf);
-  double in[ACPF_MAX_IN], out[ACPF_MAX_OUT];
-  if (kwnames || nargs < f->nmin || nargs > e->nin) goto fallback;
-  for (Py_ssize_t i = 0; i < nargs; i++)
-    if (!acpf_double(args[i], &in[i])) goto fallback;
-  for (Py_ssize_t i = nargs; i < e->nin; i++)
-    in[i] = PyFloat_AS_DOUBLE(PyTuple_GET_ITEM(f->defaults, i - f->nmin));
+  PyObject *argv[ACPF_MAX_IN];
+  acpf_value in[ACPF_MAX_IN];
+  double out[ACPF_MAX_OUT];
+  if (!acpf_gather(f, args, nargs, kwnames, argv)) goto fallback;
+  for (int i = 0; i < e->nin; i++)
+    if (!acpf_convert(e->types[i], argv[i], &in[i])) goto fallback;
 
   const int status = e->call(in, out);
   if (status != 0 || (e->kind == ACPF_NAN && isnan(out[0]))) {
-    acpf_raise(f, args, nargs, e->kind == ACPF_NAN ? -1 : status);
+    acpf_raise(f, argv, e->kind == ACPF_NAN ? -1 : status);
     return NULL;
   }
   if (!f->result) return PyFloat_FromDouble(out[0]);
@@ -145,31 +269,36 @@ fallback:
   return PyObject_Vectorcall(f->fallback, args, nargsf, kwnames);
 }
 
-/* function(c_name, nparams, fallback, defaults, result): see _core.py. */
+static const acpf_entry *acpf_find(const char *name) {
+  const acpf_entry *e = acpf_table;
+  while (e->name && strcmp(e->name, name) != 0) e++;
+  if (!e->name) PyErr_Format(PyExc_LookupError, "%s has no fast path", name);
+  return e->name ? e : NULL;
+}
+
+/* function(c_name, names, fallback, defaults, result): see _core.py. */
 static PyObject *acpf_new(PyTypeObject *type, PyObject *args, PyObject *kwds) {
   const char *name;
-  int nparams;
-  PyObject *fallback, *defaults, *result;
+  PyObject *names, *fallback, *defaults, *result;
   if (kwds && PyDict_GET_SIZE(kwds)) {
     PyErr_SetString(PyExc_TypeError, "function() takes positional arguments only");
     return NULL;
   }
-  if (!PyArg_ParseTuple(args, "siOO!O:function", &name, &nparams, &fallback, &PyTuple_Type,
-                        &defaults, &result))
+  if (!PyArg_ParseTuple(args, "sO!OO!O:function", &name, &PyTuple_Type, &names, &fallback,
+                        &PyTuple_Type, &defaults, &result))
     return NULL;
-  const acpf_entry *e = acpf_table;
-  while (e->name && strcmp(e->name, name) != 0) e++;
-  if (!e->name) return PyErr_Format(PyExc_LookupError, "%s has no fast path", name);
-  if (nparams != e->nin)
-    return PyErr_Format(PyExc_ValueError, "%s: %d parameters where the C function has %d inputs",
-                        name, nparams, e->nin);
+  const acpf_entry *e = acpf_find(name);
+  if (!e) return NULL;
+  if (PyTuple_GET_SIZE(names) != e->nin)
+    return PyErr_Format(PyExc_ValueError, "%s: %zd parameters where the C function has %d inputs",
+                        name, PyTuple_GET_SIZE(names), e->nin);
   if (!acpf_error) return PyErr_Format(PyExc_RuntimeError, "call set_error() first");
   if (!PyCallable_Check(fallback)) return PyErr_Format(PyExc_TypeError, "fallback not callable");
   const Py_ssize_t ndef = PyTuple_GET_SIZE(defaults);
   if (ndef > e->nin) return PyErr_Format(PyExc_ValueError, "%s: too many defaults", name);
   for (Py_ssize_t i = 0; i < ndef; i++)
-    if (!PyFloat_CheckExact(PyTuple_GET_ITEM(defaults, i)))
-      return PyErr_Format(PyExc_TypeError, "%s: defaults must be floats", name);
+    if (!PyFloat_CheckExact(PyTuple_GET_ITEM(defaults, i)) || e->types[e->nin - ndef + i] != 'd')
+      return PyErr_Format(PyExc_TypeError, "%s: defaults must be floats for numbers", name);
   if (result == Py_None) {
     if (e->nout != 1) return PyErr_Format(PyExc_ValueError, "%s: several outputs need a result type", name);
     result = NULL;
@@ -183,10 +312,26 @@ static PyObject *acpf_new(PyTypeObject *type, PyObject *args, PyObject *kwds) {
   }
   if (e->nin > ACPF_MAX_IN || e->nout > ACPF_MAX_OUT)
     return PyErr_Format(PyExc_ValueError, "%s: too many arguments for the fast path", name);
+  PyObject *interned = PyTuple_New(e->nin);
+  if (!interned) return NULL;
+  for (int i = 0; i < e->nin; i++) {
+    PyObject *s = PyTuple_GET_ITEM(names, i);
+    if (!PyUnicode_CheckExact(s)) {
+      Py_DECREF(interned);
+      return PyErr_Format(PyExc_TypeError, "%s: parameter names must be str", name);
+    }
+    Py_INCREF(s);
+    PyUnicode_InternInPlace(&s); /* keyword names are interned: found by identity */
+    PyTuple_SET_ITEM(interned, i, s);
+  }
   acpf_function *f = (acpf_function *)type->tp_alloc(type, 0);
-  if (!f) return NULL;
+  if (!f) {
+    Py_DECREF(interned);
+    return NULL;
+  }
   f->entry = e;
   f->fallback = Py_NewRef(fallback);
+  f->names = interned;
   f->defaults = Py_NewRef(defaults);
   f->result = Py_XNewRef(result);
   f->nmin = e->nin - (int)ndef;
@@ -196,6 +341,7 @@ static PyObject *acpf_new(PyTypeObject *type, PyObject *args, PyObject *kwds) {
 
 static int acpf_traverse(acpf_function *f, visitproc visit, void *arg) {
   Py_VISIT(f->fallback);
+  Py_VISIT(f->names);
   Py_VISIT(f->defaults);
   Py_VISIT(f->result);
   Py_VISIT(f->dict);
@@ -204,6 +350,7 @@ static int acpf_traverse(acpf_function *f, visitproc visit, void *arg) {
 
 static int acpf_clear(acpf_function *f) {
   Py_CLEAR(f->fallback);
+  Py_CLEAR(f->names);
   Py_CLEAR(f->defaults);
   Py_CLEAR(f->result);
   Py_CLEAR(f->dict);
@@ -249,6 +396,11 @@ static PyObject *acpf_get_c_outputs(acpf_function *f, void *unused) {
   return t;
 }
 
+static PyObject *acpf_get_c_inputs(acpf_function *f, void *unused) {
+  (void)unused;
+  return PyUnicode_FromString(f->entry->types);
+}
+
 static PyMethodDef acpf_methods[] = {
     {"__reduce__", acpf_reduce, METH_NOARGS, NULL},
     {NULL, NULL, 0, NULL},
@@ -258,6 +410,9 @@ static PyGetSetDef acpf_getset[] = {
     {"__dict__", PyObject_GenericGetDict, PyObject_GenericSetDict, NULL, NULL},
     {"fast_outputs", (getter)acpf_get_c_outputs, NULL,
      "Output names of the C function on the fast path (out-pointers or struct fields).", NULL},
+    {"fast_inputs", (getter)acpf_get_c_inputs, NULL,
+     "Type codes of the C inputs on the fast path: d number, e enumeration, A aircraft, "
+     "M mission.", NULL},
     {NULL, NULL, NULL, NULL, NULL},
 };
 
@@ -317,10 +472,11 @@ static PyObject *acpf_names(PyObject *module, PyObject *unused) {
 }
 
 /* c_loop(c_name, args, n, chained=False): seconds for n calls of the C function
-   through its trampoline with these inputs, no Python in the loop: the C cost
-   that a scalar call from Python pays too (tests/bench/bench_python.py).
-   chained: each call's first input waits for the previous result (+ 0.0 times
-   it), so the calls cannot overlap in the CPU, as calls from Python do not. */
+   through its trampoline with these inputs (converted as a fast call converts
+   them), no Python in the loop: the C cost that a scalar call from Python pays
+   too (tests/bench/bench_python.py). chained: each call's first number waits
+   for the previous result (+ 0.0 times it), so the calls cannot overlap in the
+   CPU, as calls from Python do not. */
 static PyObject *acpf_c_loop(PyObject *module, PyObject *args) {
   (void)module;
   const char *name;
@@ -329,24 +485,27 @@ static PyObject *acpf_c_loop(PyObject *module, PyObject *args) {
   int chained = 0;
   if (!PyArg_ParseTuple(args, "sO!L|p:c_loop", &name, &PyTuple_Type, &values, &n, &chained))
     return NULL;
-  const acpf_entry *e = acpf_table;
-  while (e->name && strcmp(e->name, name) != 0) e++;
-  if (!e->name) return PyErr_Format(PyExc_LookupError, "%s has no fast path", name);
+  const acpf_entry *e = acpf_find(name);
+  if (!e) return NULL;
   if (PyTuple_GET_SIZE(values) != e->nin || n < 1)
     return PyErr_Format(PyExc_ValueError, "%s: %d inputs and n >= 1 expected", name, e->nin);
-  double in[ACPF_MAX_IN], out[ACPF_MAX_OUT];
+  acpf_value in[ACPF_MAX_IN];
+  double out[ACPF_MAX_OUT];
+  int first = -1; /* the first number, chained to the result */
   for (int i = 0; i < e->nin; i++) {
-    in[i] = PyFloat_AsDouble(PyTuple_GET_ITEM(values, i));
-    if (in[i] == -1.0 && PyErr_Occurred()) return NULL;
+    if (!acpf_convert(e->types[i], PyTuple_GET_ITEM(values, i), &in[i]))
+      return PyErr_Format(PyExc_TypeError, "%s: argument %d is not a %c", name, i, e->types[i]);
+    if (first < 0 && e->types[i] == 'd') first = i;
   }
+  if (first < 0) return PyErr_Format(PyExc_ValueError, "%s: no number to chain", name);
   volatile double sink = 0.0;
   struct timespec t0, t1;
   clock_gettime(CLOCK_MONOTONIC, &t0);
-  const double first = in[0];
+  const double x = in[first].number;
   if (chained) {
     for (long long k = 0; k < n; k++) {
       e->call(in, out);
-      in[0] = first + out[0] * 0.0; /* the same value, after the result */
+      in[first].number = x + out[0] * 0.0; /* the same value, after the result */
     }
   } else {
     for (long long k = 0; k < n; k++) {
@@ -375,10 +534,11 @@ static struct PyModuleDef module_def = {
 };
 
 PyMODINIT_FUNC PyInit__fast(void) {
-  if (PyType_Ready(&acpf_function_type) < 0) return NULL;
+  if (PyType_Ready(&acpf_function_type) < 0 || PyType_Ready(&acpf_model_type) < 0) return NULL;
   PyObject *m = PyModule_Create(&module_def);
   if (!m) return NULL;
-  if (PyModule_AddObjectRef(m, "function", (PyObject *)&acpf_function_type) < 0) {
+  if (PyModule_AddObjectRef(m, "function", (PyObject *)&acpf_function_type) < 0 ||
+      PyModule_AddObjectRef(m, "model", (PyObject *)&acpf_model_type) < 0) {
     Py_DECREF(m);
     return NULL;
   }

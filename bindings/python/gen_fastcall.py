@@ -6,17 +6,20 @@
 Reads the SWIG interface for the headers it wraps, in order, and for where
 NaN-checking of double returns starts (`%apply double ACPY_CHECKED`), so the
 fast path refuses exactly what the SWIG path refuses. From each header it
-takes the functions whose every input is a `double` and whose result is
+takes the functions whose inputs are models first, then numbers:
 
-  double f(double, ...)                       kind PLAIN (before the %apply)
+  inputs   const acp_aircraft * (type code 'A'), const acp_mission * ('M'),
+           then double ('d') or an enum-valued int rating/mode/end ('e', taken
+           as arrays.i takes it: a whole real number, else -1)
+  double f(inputs)                            kind PLAIN (before the %apply)
                                               or NAN (NaN raises), one output
-  int f(double, ..., double *a, double *b)    kind STATUS, outputs a, b, ...
-  int f(double, ..., <struct of doubles> *o)  kind STATUS, outputs the fields
+  int f(inputs, double *a, double *b)         kind STATUS, outputs a, b, ...
+  int f(inputs, <struct of doubles> *o)       kind STATUS, outputs the fields
 
-and writes one trampoline per function, `int f(const double *in, double *out)`,
-plus the table acpf_table[] (C name, inputs, outputs and their names). Anything
-else (models, strings, enums, arrays) stays with SWIG alone. Nothing here
-computes: each trampoline is one call of the C function.
+and writes one trampoline per function, `int f(const acpf_value *in, double *out)`,
+plus the table acpf_table[] (C name, input types, outputs and their names).
+Anything else (strings, sizes, arrays, other structs) stays with SWIG alone.
+Nothing here computes: each trampoline is one call of the C function.
 """
 
 import re
@@ -61,6 +64,27 @@ def double_structs(texts):
     return structs
 
 
+MODELS = {"const acp_aircraft*": "A", "const acp_mission*": "M"}
+ENUMS = ("rating", "mode", "end")  # arrays.i's enum-valued int parameters
+ARGUMENT = {"A": "(const acp_aircraft *)in[{0}].model", "M": "(const acp_mission *)in[{0}].model",
+            "d": "in[{0}].number", "e": "in[{0}].enumeration"}
+
+
+def input_codes(plist):
+    """Type codes of the leading inputs of a prototype: models first, then numbers."""
+    codes = ""
+    for ctype, pname in plist:
+        if ctype in MODELS and not set(codes) & set("de"):  # models come first
+            codes += MODELS[ctype]
+        elif ctype == "double":
+            codes += "d"
+        elif ctype == "int" and pname in ENUMS:
+            codes += "e"
+        else:
+            break
+    return codes
+
+
 def main(interface, incdir, output):
     swig = strip_comments(Path(interface).read_text())
     # headers in SWIG order, each marked checked when after the %apply of ACPY_CHECKED
@@ -79,11 +103,11 @@ def main(interface, incdir, output):
         for ret, name, params in PROTO.findall(text):
             ret = " ".join(ret.split())
             plist = params_of(params)
-            inputs = [p for t, p in plist if t == "double"]
-            rest = plist[len(inputs):]
-            if [t for t, _ in plist[:len(inputs)]] != ["double"] * len(inputs) or not inputs:
+            codes = input_codes(plist)
+            rest = plist[len(codes):]
+            if not codes or "d" not in codes:
                 continue
-            call_in = ", ".join(f"in[{i}]" for i in range(len(inputs)))
+            call_in = ", ".join(ARGUMENT[c].format(i) for i, c in enumerate(codes))
             if ret == "double" and not rest:
                 kind, outputs = ("ACPF_NAN" if checked else "ACPF_PLAIN"), [name]
                 body = f"  out[0] = {name}({call_in});\n  return 0;"
@@ -100,10 +124,10 @@ def main(interface, incdir, output):
                         f"{copy}  return status;")
             else:
                 continue
-            code.append(f"static int acpf_{name}(const double *in, double *out) {{\n{body}\n}}\n")
+            code.append(f"static int acpf_{name}(const acpf_value *in, double *out) {{\n{body}\n}}\n")
             names = ", ".join(f'"{o}"' for o in outputs)
             code.append(f"static const char *const acpf_{name}_out[] = {{{names}}};\n")
-            entries.append(f'  {{"{name}", {len(inputs)}, {len(outputs)}, {kind}, '
+            entries.append(f'  {{"{name}", "{codes}", {len(codes)}, {len(outputs)}, {kind}, '
                            f"acpf_{name}, acpf_{name}_out}},")
     if len(entries) < 10:
         sys.exit(f"gen_fastcall.py: only {len(entries)} functions found in {interface}")
@@ -112,7 +136,7 @@ def main(interface, incdir, output):
                 "   acperf.i: do not edit, do not commit. */\n")
         f.write("".join(code))
         f.write("static const acpf_entry acpf_table[] = {\n" + "\n".join(entries)
-                + "\n  {NULL, 0, 0, 0, NULL, NULL}\n};\n")
+                + "\n  {NULL, NULL, 0, 0, 0, NULL, NULL}\n};\n")
 
 
 if __name__ == "__main__":

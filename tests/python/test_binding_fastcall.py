@@ -1,15 +1,18 @@
 """The scalar fast path (acperf._fast, bindings/python/fastcall.c) against the SWIG path.
 
-Every public function whose C inputs are all doubles is an acperf._fast.function:
-positional floats and ints go straight to C, anything else to the generated
-Python function (`__wrapped__`, whose scalar path is the SWIG call). For every
-such function, on the grid of test_binding_api.py (valid and invalid points),
-the fast call must give the same bits as the SWIG call, or the same
-AcperfError (message, status); and the calls it does not take must reach the
-Python function unchanged.
+Every public function whose C inputs are models (aircraft, mission), then
+doubles and enum-valued ints is an acperf._fast.function: floats and ints and
+Aircraft/Mission objects, by position or keyword, go straight to C, anything
+else to the generated Python function (`__wrapped__`, whose scalar path is the
+SWIG call). For every such function, on the grids of test_binding_api.py and
+test_binding_aircraft.py (valid and invalid points), the fast call must give
+the same bits as the SWIG call, or the same AcperfError (message, status); and
+the calls it does not take must reach the Python function unchanged. The
+reference is the library's own SWIG call: the physics is checked elsewhere.
 """
 
 import inspect
+import itertools
 import math
 import pickle
 
@@ -18,8 +21,9 @@ import pytest
 
 import acperf
 from acperf import _fast
-from conftest import parse_headers, same
+from conftest import demo_aircraft_path, parse_headers, same
 from test_binding_api import POOLS, grid
+from test_binding_aircraft import POOLS as AIRCRAFT_POOLS
 
 FAST = _fast.function
 UNIT_VALUES = [0.0, 1000.0, -3.5, 1.0e308, math.inf, -math.inf, math.nan]
@@ -38,13 +42,51 @@ def public_functions():
 
 FUNCTIONS = public_functions()
 FAST_NAMES = sorted(_fast.names())
+UNITS = [getattr(acperf.units, n) for n in acperf.units.__all__]
+MODEL_NAMES = [c for c in FAST_NAMES if set(FUNCTIONS[c].fast_inputs) & set("AM")]
+
+JET = acperf.Aircraft.from_file(demo_aircraft_path())
+MISSION = acperf.Mission(distance=300 * 1852.0, cruise_altitude=10668.0)
+# Numbers of the model functions: the pools of test_binding_aircraft.py and, for
+# the cruise and the trip, valid and invalid values of cruise.h and mission.h
+# (the invented demo jet: 30 to 40 t, about 10 km; enum values 0 to 4 are modes,
+# 9 and 2.5 are none). The first value of each pool is valid.
+MODEL_POOLS = dict(AIRCRAFT_POOLS, **{
+    "mode": [2.0, 0.0, 9.0, 2.5], "cost_index": [0.0, 30.0, -1.0],
+    "end": [0.0, 1.0, 7.0], "end_value": [100000.0, 2000.0, -1.0],
+    "step_climb": [0.0, 1.0], "takeoff_mass": [34000.0, 1.0e7, -1.0],
+    "zero_fuel_mass": [30000.0, -1.0], "mass": [36000.0, 30000.0, 0.0, 2.0e6],
+    "hp": [10668.0, 3000.0, 90000.0], "tas": [230.0, 150.0, 0.0, 400.0],
+    "rating": [1.0, 3.0, 7.0, 2.5, 1.0e10],
+})
+MODEL_MAX_POINTS = 40
+
+
+def model_grid(params):
+    """Each pool's values around the first (valid) point, then a sample of the
+    product, then all NaN."""
+    pools = [[JET] if p == "ac" else [MISSION] if p == "mission" else MODEL_POOLS[p]
+             for p in params]
+    base = tuple(pool[0] for pool in pools)
+    points = [base[:i] + (v,) + base[i + 1:] for i, pool in enumerate(pools) for v in pool[1:]]
+    product = list(itertools.product(*pools))
+    points += product[::max(1, len(product) // MODEL_MAX_POINTS)]
+    return [base] + points + [tuple(v if isinstance(v, acperf._fast.model) else math.nan
+                                    for v in base)]
 
 
 def points_of(fn):
     params = list(inspect.signature(fn).parameters)
     if fn.c_function in ("acp_" + n for n in acperf.units.__all__):
         return [(v,) for v in UNIT_VALUES]
+    if set(fn.fast_inputs) & set("AM"):
+        return model_grid(params)
     return grid(params)
+
+
+def swig_args(args):
+    """The arguments as SWIG takes them: models as their handles."""
+    return tuple(acperf._core.model_handle(a) for a in args)
 
 
 def outcome(call, *args):
@@ -68,21 +110,41 @@ def same_result(a, b):
     return same(ra, rb)
 
 
-def test_every_all_double_function_has_the_fast_path():
-    # The functions of the headers whose inputs are all doubles, no model, with a
-    # double result or double/struct outputs: each public form is a fast function.
+CODES = {"double": "d", "const acp_aircraft*": "A", "const acp_mission*": "M"}
+
+
+def c_codes(params):
+    """Type codes of a prototype's inputs as the fast path names them (None: other)."""
+    return "".join(CODES.get(t, "e" if (t, p) in [("int", "rating"), ("int", "mode"),
+                                                   ("int", "end")] else "?")
+                   for t, p in params)
+
+
+def test_every_model_and_number_function_has_the_fast_path():
+    # The functions of the headers whose inputs are models, then doubles and enums,
+    # with a double result or double/struct outputs: each public form is a fast
+    # function whose inputs are exactly the C function's, in the header's order.
     protos = parse_headers()
-    assert len(FAST_NAMES) >= 70
+    assert len(FAST_NAMES) >= 95 and len(MODEL_NAMES) >= 20
     for cname in FAST_NAMES:
         _, params = protos[cname]
-        assert params and params[0][0] == "double", cname
         assert cname in FUNCTIONS, f"{cname}: no public Python form"
-        assert isinstance(FUNCTIONS[cname], FAST), f"{cname}: public form is not the fast path"
-    # and none of those taking a model, a string or an enum
+        fn = FUNCTIONS[cname]
+        assert isinstance(fn, FAST), f"{cname}: public form is not the fast path"
+        codes = fn.fast_inputs
+        assert c_codes(params[:len(codes)]) == codes, cname
+        if fn not in UNITS:  # the unit conversions all take `x`
+            assert list(inspect.signature(fn).parameters) == [p for _, p in params[:len(codes)]]
+    # and every public form that is not fast has an input the fast path cannot take
+    # (a size, a string, an array, a capacity) or outputs that are not doubles
     for cname, fn in FUNCTIONS.items():
-        if isinstance(fn, FAST):
-            assert all(t == "double" for t, _ in protos[cname][1][:len(
-                inspect.signature(fn).parameters)]), cname
+        if not isinstance(fn, FAST) and cname in protos:
+            ret, params = protos[cname]
+            n = len(inspect.signature(fn).parameters)
+            outs = params[n:]
+            plain = "?" not in c_codes(params[:n]) and all(
+                t == "double*" for t, _ in outs) and (ret == "double") == (not outs)
+            assert not plain or cname.endswith("_n"), cname
 
 
 @pytest.mark.parametrize("cname", FAST_NAMES)
@@ -95,7 +157,7 @@ def test_fast_path_is_the_swig_path_bit_for_bit(cname):
         fast = outcome(fn, *pt)
         slow = outcome(fn.__wrapped__, *pt)  # the Python function: SWIG's scalar call
         assert same_result(fast, slow), (pt, fast, slow)
-        raw = outcome(swig, *pt)
+        raw = outcome(swig, *swig_args(pt))
         assert raw[0] == fast[0] and (raw[0] == "ok" or raw[2:] == fast[2:]), (pt, raw, fast)
         if fast[0] == "ok":
             nok += 1
@@ -116,20 +178,27 @@ def test_other_scalar_types_and_defaults(cname):
     pt = points_of(fn)[0]
     ref = outcome(fn.__wrapped__, *pt)
     # ints (also in the error message), numpy float64 (a float), numpy float32 and
-    # int64 scalars (fallback), keywords (fallback): all as the Python function
-    variants = [tuple(int(v) if math.isfinite(v) and v == int(v) else v for v in pt),
-                tuple(np.float64(v) for v in pt),
-                tuple(np.float32(v) for v in pt)]
+    # int64 scalars (fallback), keywords: all as the Python function
+    def each(convert):
+        return tuple(v if isinstance(v, acperf._fast.model) else convert(v) for v in pt)
+
+    variants = [each(lambda v: int(v) if math.isfinite(v) and v == int(v) else v),
+                each(np.float64), each(np.float32)]
     for args in variants:
         assert same_result(outcome(fn, *args), outcome(fn.__wrapped__, *args)), args
     kw = dict(zip(params, pt))
     assert same_result(outcome(lambda: fn(**kw)), outcome(lambda: fn.__wrapped__(**kw)))
+    last = list(params)[-1]
+    head = pt[:-1]
+    assert same_result(outcome(lambda: fn(*head, **{last: pt[-1]})),
+                       outcome(lambda: fn.__wrapped__(*head, **{last: pt[-1]})))
     # trailing defaults (dtemp=0.0): filled in by the fast path, shown in errors as SWIG does
     required = [p for p in params.values() if p.default is inspect.Parameter.empty]
     if len(required) < len(params):
         short = pt[:len(required)]
         assert same_result(outcome(fn, *short), outcome(fn.__wrapped__, *short))
-        bad = (math.nan,) * len(required)
+        bad = tuple(v if isinstance(v, acperf._fast.model) else math.nan
+                    for v in pt[:len(required)])
         assert same_result(outcome(fn, *bad), outcome(fn.__wrapped__, *bad))
 
 
@@ -140,20 +209,30 @@ def test_fast_calls_never_reach_the_python_function_and_the_rest_do():
         calls.append((args, kwargs))
         return "fallback"
 
-    f = FAST("acp_cas_to_tas", 3, fallback, (0.0,), None)
+    f = FAST("acp_cas_to_tas", ("cas", "hp", "dtemp"), fallback, (0.0,), None)
     assert f(150.0, 3000.0) == acperf.capi.acp_cas_to_tas(150.0, 3000.0, 0.0)
     assert f(150, 3000, 10) == acperf.capi.acp_cas_to_tas(150.0, 3000.0, 10.0)
     assert f(np.float64(150.0), True, 0.0) == acperf.capi.acp_cas_to_tas(150.0, 1.0, 0.0)
     with pytest.raises(acperf.AcperfError, match=r"acp_cas_to_tas\(-1.0, 3000.0, 0.0\)"):
         f(-1.0, 3000.0)
+    # keywords, in any order, with the defaults filled in
+    assert f(150.0, 3000.0, dtemp=10.0) == acperf.capi.acp_cas_to_tas(150.0, 3000.0, 10.0)
+    assert f(dtemp=10.0, hp=3000.0, cas=150.0) == acperf.capi.acp_cas_to_tas(150.0, 3000.0, 10.0)
+    assert f(150.0, hp=3000.0) == acperf.capi.acp_cas_to_tas(150.0, 3000.0, 0.0)
+    hp = "".join(["h", "p"])  # a keyword name that is not the interned string
+    assert f(150.0, **{hp: 3000.0}) == acperf.capi.acp_cas_to_tas(150.0, 3000.0, 0.0)
+    with pytest.raises(acperf.AcperfError, match=r"acp_cas_to_tas\(-1.0, 3000.0, 0.0\)"):
+        f(hp=3000.0, cas=-1.0)
     assert calls == []
-    for args, kwargs in [(([150.0],), {"hp": 0.0}), ((150.0, 0.0), {"dtemp": 1.0}),
+    for args, kwargs in [(([150.0],), {"hp": 0.0}), ((150.0, 0.0), {"dtemp": [1.0]}),
                          ((np.float32(1.0), 0.0), {}), ((np.int64(1), 0.0), {}),
                          ((150.0,), {}), ((1.0, 2.0, 3.0, 4.0), {}), ((10 ** 400, 0.0), {}),
-                         (("150", 0.0), {}), ((None, 0.0), {})]:
+                         (("150", 0.0), {}), ((None, 0.0), {}),
+                         ((150.0, 0.0), {"altitude": 1.0}), ((150.0, 0.0), {"hp": 1.0}),
+                         ((), {"hp": 0.0, "dtemp": 1.0}), ((150.0,), {"dtemp": 1.0})]:
         assert f(*args, **kwargs) == "fallback"
         assert calls[-1] == (args, kwargs)
-    assert len(calls) == 9
+    assert len(calls) == 13
 
 
 def test_argument_errors_are_the_python_functions():
@@ -190,10 +269,57 @@ def test_a_fast_function_looks_like_the_python_function():
 
 def test_fast_function_refuses_what_it_cannot_do():
     with pytest.raises(LookupError):
-        FAST("acp_drag", 5, print, (), None)  # takes a model: SWIG only
+        FAST("acp_drag_component", ("ac", "index", "hp", "dtemp", "tas"), print, (),
+             acperf.ComponentDrag)  # a size_t index: SWIG only
     with pytest.raises(ValueError):
-        FAST("acp_cas_to_mach", 3, print, (), None)  # wrong parameter count
+        FAST("acp_cas_to_mach", ("cas", "hp", "dtemp"), print, (), None)  # parameter count
     with pytest.raises(ValueError):
-        FAST("acp_isa", 2, print, (), None)  # six outputs need a result type
+        FAST("acp_isa", ("hp", "dtemp"), print, (), None)  # six outputs need a result type
     with pytest.raises(TypeError):
-        FAST("acp_isa", 2, print, (), dict)  # not a namedtuple
+        FAST("acp_isa", ("hp", "dtemp"), print, (), dict)  # not a namedtuple
+    with pytest.raises(TypeError):
+        FAST("acp_isa", ("hp", 2), print, (), acperf.Atmos)  # names must be str
+    with pytest.raises(TypeError):  # a default for a model
+        FAST("acp_ceilings", ("ac", "mass", "dtemp"), print, (JET, 1.0, 0.0), acperf.CeilingSet)
+
+
+def test_models_on_the_fast_path():
+    calls = []
+
+    def fallback(*args, **kwargs):
+        calls.append((args, kwargs))
+        return "fallback"
+
+    f = FAST("acp_drag", ("ac", "mass", "hp", "dtemp", "tas"), fallback, (), acperf.DragParts)
+    assert f.fast_inputs == "Adddd"
+    raw = acperf.capi.acp_drag(JET._handle, 36000.0, 10668.0, 0.0, 230.0)
+    want = tuple(getattr(raw, name) for name in acperf.DragParts._fields)
+    assert f(JET, 36000.0, 10668.0, 0.0, 230.0) == want
+    assert f(tas=230.0, ac=JET, mass=36000.0, hp=10668.0, dtemp=0.0) == want
+    # a copy has its own C object; a changed model is read afresh
+    other = JET.copy()
+    assert f(other, 36000.0, 10668.0, 0.0, 230.0) == want
+    other["component.wing.roughness"] = 4.0 * other["component.wing.roughness"]
+    assert f(other, 36000.0, 10668.0, 0.0, 230.0) != want
+    assert calls == []
+    # a raw SWIG handle, a mission for the aircraft, a detached model, None: fallback
+    detached = JET.copy()
+    detached._detach()
+    for model in (JET._handle, MISSION, detached, None, 1.0):
+        assert f(model, 36000.0, 10668.0, 0.0, 230.0) == "fallback"
+    assert len(calls) == 5
+    # and the public function gives the Python path's errors there
+    with pytest.raises(TypeError):
+        acperf.drag(MISSION, 36000.0, 10668.0, 0.0, 230.0)
+    assert acperf.drag(detached, 36000.0, 10668.0, 0.0, 230.0) == acperf.DragParts(*want)
+    with pytest.raises(ValueError):
+        acperf.Aircraft()._attach(JET._handle, "X")
+
+
+def test_enumerations_as_swig_takes_them():
+    # arrays.i: a whole real number is the enum value, anything else -1 (refused)
+    fn = acperf.engine_rating
+    for rating in (1, 1.0, True, 2.5, math.nan, math.inf, 1.0e10, -1.0e10, 3):
+        fast = outcome(fn, JET, rating, 10668.0, 0.0, 230.0)
+        slow = outcome(fn.__wrapped__, JET, rating, 10668.0, 0.0, 230.0)
+        assert same_result(fast, slow), (rating, fast, slow)

@@ -7,11 +7,12 @@ generated function
 * calls the scalar C function directly when every argument is a Python or
   numpy float/int (the fast path: one SWIG ``-builtin`` call; a failure raises
   :class:`AcperfError` from C with the status text of ``acp_strerror``);
-* for the functions whose inputs are all doubles (no model), is itself a C
-  callable of ``acperf._fast`` (fastcall.c): positional Python floats and ints
-  go straight to the C function with no Python frame, the same results and
-  the same AcperfError as the SWIG call; every other call goes to the
-  generated Python function (its ``__wrapped__``), described here;
+* for the functions whose inputs are models, numbers and enumerations, is
+  itself a C callable of ``acperf._fast`` (fastcall.c): Python floats and ints
+  and Aircraft/Mission objects, by position or keyword, go straight to the C
+  function with no Python frame, the same results and the same AcperfError as
+  the SWIG call; every other call goes to the generated Python function (its
+  ``__wrapped__``), described here;
 * otherwise converts the arguments to float64 numpy arrays (lists, tuples,
   numpy arrays of any dtype or stride, pandas Series), broadcasts them against
   each other, calls the array form once on contiguous memory, reshapes the
@@ -96,8 +97,11 @@ def {name}({signature}):
 
 
 def model_handle(model):
-    """The C handle of a model argument: an object's `_handle` (acperf.Aircraft), or
-    a raw SWIG pointer as it is."""
+    """The C handle of a model argument: an object's `_handle` (acperf.Aircraft), a
+    raw SWIG pointer as it is, and a numpy scalar given for a number passed through
+    unbroadcast (the cruise's mode and cost index) as a Python float."""
+    if isinstance(model, np.number):
+        return float(model)
     return getattr(model, "_handle", model)
 
 
@@ -159,20 +163,19 @@ def bind(name, scalar, array=None, params=(), defaults=None, outputs=None, resul
     fn.c_function = scalar.__name__
     fn.c_array_function = array.__name__ if array is not None else None
     fn.c_models = tuple(models)
-    if not models:
-        fn = fast_path(fn, scalar.__name__, len(params),
-                       tuple(defaults[p] for p in params if p in defaults), result)
-    return fn
+    return fast_path(fn, scalar.__name__, tuple(params),
+                     tuple(defaults[p] for p in params if p in defaults), result)
 
 
-def fast_path(fn, cname, nparams, defaults=(), result=None):
-    """`fn` as an acperf._fast.function: all-scalar positional calls go straight to the
-    C function `cname`, anything else to `fn`. `fn` itself when the C function has
-    no fast path (inputs that are not all doubles) or its outputs are not the
-    fields of `result`."""
+def fast_path(fn, cname, params, defaults=(), result=None):
+    """`fn` as an acperf._fast.function: all-scalar calls (by position or keyword,
+    models as Aircraft/Mission objects) go straight to the C function `cname`,
+    anything else to `fn`. `fn` itself when the C function has no fast path
+    (inputs other than models, numbers and enumerations) or its outputs are not
+    the fields of `result`."""
     if cname not in _FAST_NAMES:
         return fn
-    fast = _fast.function(cname, nparams, fn, defaults, result)
+    fast = _fast.function(cname, params, fn, defaults, result)
     if result is not None and tuple(result._fields) != fast.fast_outputs:
         return fn
     fast.__dict__.update(fn.__dict__)  # c_function, c_array_function, c_models

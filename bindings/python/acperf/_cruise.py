@@ -10,6 +10,7 @@ flight-manual data.
 
 import numpy as np
 
+from . import _fast
 from . import capi as _c
 from ._core import bind, model_handle, result_type
 
@@ -55,7 +56,7 @@ TripResult = result_type(
     "A trip and its fuel (the fields of acp_trip_result).")
 
 
-class Mission:
+class Mission(_fast.model):
     """A mission (route, cruise, fuel policy): an owned acp_mission handle with
     dict-like access by the keys of docs/methods/trip.md; typical defaults for
     what is not set."""
@@ -66,6 +67,7 @@ class Mission:
         self._handle = _c.acp_mission_new()
         if self._handle is None:
             raise MemoryError("acp_mission_new")
+        self._attach(self._handle, "M")  # its C address, for the fast scalar calls
         for key, value in values.items():
             self[key] = value
 
@@ -83,8 +85,9 @@ class Mission:
     def __del__(self):
         handle = getattr(self, "_handle", None)
         if handle is not None:
-            _c.acp_mission_free(handle)
+            self._detach()
             self._handle = None
+            _c.acp_mission_free(handle)
 
 
 _AC = ("ac",)

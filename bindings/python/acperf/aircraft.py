@@ -12,6 +12,7 @@ and text, its "line N: ..." message.
 """
 
 from . import capi as _c
+from . import _fast
 from ._core import AcperfError
 
 __all__ = ["Aircraft"]
@@ -23,7 +24,7 @@ def _is_text_key(key):
     return key in ("name", "engine_type") or (key.startswith("component.") and key.endswith(_TEXT_KEYS_SUFFIX))
 
 
-class Aircraft:
+class Aircraft(_fast.model):
     """An aircraft model: an owned acp_aircraft handle with dict-like access by key."""
 
     __slots__ = ("_handle", "__weakref__")
@@ -33,10 +34,12 @@ class Aircraft:
         if handle is None:
             raise MemoryError("acp_aircraft_new: out of memory")
         self._handle = handle
+        self._attach(handle, "A")  # its C address, for the fast scalar calls
 
     def __del__(self):
         handle = getattr(self, "_handle", None)
         if handle is not None:
+            self._detach()
             self._handle = None
             _c.acp_aircraft_free(handle)
 

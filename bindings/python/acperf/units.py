@@ -85,7 +85,7 @@ def _make_linear(name, cname, op, const):
                        f"Series (the same single operation by {const!r}).\n\n"
                        + (scalar.__doc__ or ""))
     convert.c_function = cname
-    return fast_path(convert, cname, 1)
+    return fast_path(convert, cname, ("x",))
 
 
 for _name, (_cname, _op, _const) in _LINEAR.items():
