@@ -118,6 +118,7 @@ typedef struct {
   PyObject *names;     /* tuple of the parameter names (interned), for keywords */
   PyObject *defaults;  /* tuple of the default objects of the trailing parameters */
   PyObject *result;    /* named result type (a tuple subtype) or NULL: one float */
+  PyObject *last;      /* the last named result given, refilled when no one else holds it */
   int nmin;            /* arguments without a default */
   PyObject *dict;
   vectorcallfunc vectorcall;
@@ -233,6 +234,45 @@ static int acpf_gather(const acpf_function *f, PyObject *const *args, Py_ssize_t
   return 1;
 }
 
+/* The named result: a tuple subtype without extra slots, of floats. When the
+   last one given is held by nothing but this function (the caller let it go,
+   or took a field and dropped it), it is refilled in place instead of a new
+   one being made, as zip() and enumerate() recycle their result tuples; so is
+   each float in it that nothing else holds. No one can tell the difference:
+   the object is unreachable but from here, and holds the values a new one
+   would. A tuple of floats never needs the cycle collector. */
+static PyObject *acpf_named(acpf_function *f, const double *out) {
+  const int n = f->entry->nout;
+  PyObject *r = f->last;
+  if (r && Py_REFCNT(r) == 1) {
+    for (int i = 0; i < n; i++) {
+      PyObject *v = PyTuple_GET_ITEM(r, i);
+      if (Py_REFCNT(v) == 1 && PyFloat_CheckExact(v)) {
+        ((PyFloatObject *)v)->ob_fval = out[i];
+        continue;
+      }
+      PyObject *w = PyFloat_FromDouble(out[i]);
+      if (!w) return NULL;
+      PyTuple_SET_ITEM(r, i, w);
+      Py_DECREF(v);
+    }
+    return Py_NewRef(r);
+  }
+  PyTypeObject *type = (PyTypeObject *)f->result;
+  r = type->tp_alloc(type, n);
+  if (!r) return NULL;
+  for (int i = 0; i < n; i++) {
+    PyObject *v = PyFloat_FromDouble(out[i]);
+    if (!v) {
+      Py_DECREF(r);
+      return NULL;
+    }
+    PyTuple_SET_ITEM(r, i, v);
+  }
+  Py_XSETREF(f->last, Py_NewRef(r));
+  return r;
+}
+
 static PyObject *acpf_call(PyObject *self, PyObject *const *args, size_t nargsf,
                            PyObject *kwnames) {
   acpf_function *f = (acpf_function *)self;
@@ -251,19 +291,7 @@ static PyObject *acpf_call(PyObject *self, PyObject *const *args, size_t nargsf,
     return NULL;
   }
   if (!f->result) return PyFloat_FromDouble(out[0]);
-  /* the named result: a tuple subtype without extra slots, filled in place */
-  PyTypeObject *type = (PyTypeObject *)f->result;
-  PyObject *r = type->tp_alloc(type, e->nout);
-  if (!r) return NULL;
-  for (int i = 0; i < e->nout; i++) {
-    PyObject *v = PyFloat_FromDouble(out[i]);
-    if (!v) {
-      Py_DECREF(r);
-      return NULL;
-    }
-    PyTuple_SET_ITEM(r, i, v);
-  }
-  return r;
+  return acpf_named(f, out);
 
 fallback:
   return PyObject_Vectorcall(f->fallback, args, nargsf, kwnames);
@@ -344,6 +372,7 @@ static int acpf_traverse(acpf_function *f, visitproc visit, void *arg) {
   Py_VISIT(f->names);
   Py_VISIT(f->defaults);
   Py_VISIT(f->result);
+  Py_VISIT(f->last);
   Py_VISIT(f->dict);
   return 0;
 }
@@ -353,6 +382,7 @@ static int acpf_clear(acpf_function *f) {
   Py_CLEAR(f->names);
   Py_CLEAR(f->defaults);
   Py_CLEAR(f->result);
+  Py_CLEAR(f->last);
   Py_CLEAR(f->dict);
   return 0;
 }

@@ -16,6 +16,8 @@ Not a test: it prints figures. Run from the top of the repository after a build:
    call, measured in this run by acperf._fast.c_loop (the C function in a C
    loop with the same inputs); the scalar loops of the C benchmark
    (acperf_bench, optional second argument, varied inputs) are shown beside.
+   Named results are timed dropped at once (the fast path refills the last
+   one), kept (`r = ...`: a new one each call) and with one field taken.
 """
 
 import ctypes
@@ -30,6 +32,8 @@ import acperf
 
 N = 1_000_000
 REPEAT = 9
+# The invented demo aircraft of the examples (from the top of the repository).
+JET = acperf.Aircraft.from_file("examples/aircraft/regional_jet.toml")
 
 lib = ctypes.CDLL(sys.argv[1] if len(sys.argv) > 1 else "build-py/libperf/libacperf.so")
 PD = ctypes.POINTER(ctypes.c_double)
@@ -138,7 +142,9 @@ def scalar_bench(bench_exe):
          "raw_tas": acperf.capi.acp_cas_to_tas,
          "isa": acperf.isa, "isa_py": acperf.isa.__wrapped__, "raw_isa": acperf.capi.acp_isa,
          "ft_to_m": acperf.units.ft_to_m, "ft_to_m_py": acperf.units.ft_to_m.__wrapped__,
-         "raw_ft": acperf.capi.acp_ft_to_m}
+         "raw_ft": acperf.capi.acp_ft_to_m,
+         "drag": acperf.drag, "drag_py": acperf.drag.__wrapped__, "raw_drag": acperf.capi.acp_drag,
+         "jet": JET, "jet_handle": JET._handle}
     groups = [
         ("acp_cas_to_mach", (150.0, 3000.0), [
             ("acperf.cas_to_mach(150.0, 3000.0) [fast]", "cas_to_mach(150.0, 3000.0)"),
@@ -150,9 +156,19 @@ def scalar_bench(bench_exe):
             ("  Python function behind it (before)", "cas_to_tas_py(150.0, 3000.0, 10.0)"),
             ("  acperf.capi.acp_cas_to_tas (raw SWIG)", "raw_tas(150.0, 3000.0, 10.0)")]),
         ("acp_isa", (11000.0, 10.0), [
-            ("acperf.isa(11000.0, 10.0) [fast, Atmos]", "isa(11000.0, 10.0)"),
+            ("acperf.isa(11000.0, 10.0) [fast, Atmos dropped]", "isa(11000.0, 10.0)"),
+            ("  r = acperf.isa(11000.0, 10.0) [fast, kept]", "r = isa(11000.0, 10.0)"),
+            ("  acperf.isa(11000.0, 10.0).temperature [fast]", "isa(11000.0, 10.0).temperature"),
+            ("  acperf.isa(11000.0, dtemp=10.0) [fast, keyword]", "isa(11000.0, dtemp=10.0)"),
             ("  Python function behind it (before)", "isa_py(11000.0, 10.0)"),
-            ("  acperf.capi.acp_isa (raw SWIG, struct)", "raw_isa(11000.0, 10.0)")]),
+            ("  acperf.capi.acp_isa (raw SWIG, struct)", "raw_isa(11000.0, 10.0)"),
+            ("  r = acperf.capi.acp_isa (raw SWIG, kept)", "r = raw_isa(11000.0, 10.0)")]),
+        ("acp_drag", (JET, 36000.0, 10668.0, 0.0, 230.0), [
+            ("acperf.drag(jet, 36000.0, ...) [fast, dropped]", "drag(jet, 36000.0, 10668.0, 0.0, 230.0)"),
+            ("  r = acperf.drag(jet, ...) [fast, kept]", "r = drag(jet, 36000.0, 10668.0, 0.0, 230.0)"),
+            ("  Python function behind it (before)", "drag_py(jet, 36000.0, 10668.0, 0.0, 230.0)"),
+            ("  acperf.capi.acp_drag (raw SWIG, struct)",
+             "raw_drag(jet_handle, 36000.0, 10668.0, 0.0, 230.0)")]),
         ("acp_ft_to_m", (1000.0,), [
             ("acperf.units.ft_to_m(1000.0) [fast]", "ft_to_m(1000.0)"),
             ("  Python function behind it (before)", "ft_to_m_py(1000.0)"),
@@ -169,7 +185,8 @@ def scalar_bench(bench_exe):
             t_chain = min(t_chain, acperf._fast.c_loop(cname, args, n, True) / n)
             for i, (_, stmt) in enumerate(rows):
                 t_py[i] = min(t_py[i], timeit.timeit(stmt, globals=g, number=n) / n)
-        print(f"  C {cname}{args} in a C loop {' ' * max(0, 26 - len(cname) - len(str(args)))}"
+        shown = "(" + ", ".join("jet" if a is JET else repr(a) for a in args) + ")"
+        print(f"  C {cname}{shown} in a C loop {' ' * max(0, 26 - len(cname) - len(shown))}"
               f"{t_c * 1e9:7.1f} ns/call; chained {t_chain * 1e9:6.1f} ns/call")
         for (label, _), t in zip(rows, t_py):
             print(f"  {label:48s} {t * 1e9:7.1f} ns/call   overhead {(t - t_c) * 1e9:6.1f} ns"

@@ -323,3 +323,31 @@ def test_enumerations_as_swig_takes_them():
         fast = outcome(fn, JET, rating, 10668.0, 0.0, 230.0)
         slow = outcome(fn.__wrapped__, JET, rating, 10668.0, 0.0, 230.0)
         assert same_result(fast, slow), (rating, fast, slow)
+
+
+def test_recycled_named_results_never_change_what_a_caller_holds():
+    # A named result no one holds any more is refilled by the next call (fastcall.c,
+    # acpf_named); whatever a caller still holds, the result or one of its floats,
+    # keeps its values. The reference is the SWIG path (`__wrapped__`).
+    fn = acperf.isa
+    want = {hp: fn.__wrapped__(hp) for hp in (0.0, 1000.0, 2000.0, 3000.0, 5000.0, 11000.0)}
+    kept = fn(0.0)
+    other = fn(11000.0)
+    assert kept == want[0.0] and other == want[11000.0]
+    temperature = fn(5000.0).temperature  # the result dropped, one field kept
+    first, second, *_ = fn(3000.0)  # unpacked
+    gone = fn(1000.0)
+    gone_id = id(gone)
+    del gone
+    again = fn(2000.0)
+    assert id(again) == gone_id, "the dropped result is the one refilled"
+    assert again == want[2000.0] and type(again) is acperf.Atmos
+    assert temperature == want[5000.0].temperature
+    assert (first, second) == want[3000.0][:2]
+    assert kept == want[0.0] and other == want[11000.0]
+    # a failed call leaves the last result as it was; a dropped one is refilled right
+    del again
+    with pytest.raises(acperf.AcperfError):
+        fn(math.nan)
+    assert [tuple(fn(hp)) for hp in want] == [tuple(v) for v in want.values()]
+    assert all(type(v) is float for v in fn(1000.0))
