@@ -37,6 +37,9 @@
 enum { ACPF_PLAIN, ACPF_NAN, ACPF_STATUS };
 #define ACPF_MAX_IN 16
 #define ACPF_MAX_OUT 32
+/* Named results kept for refilling: two, so that a loop that stores each result
+   in the same variable (r = isa(h)) refills the one before last. */
+#define ACPF_SPARES 2
 
 /* One input of a trampoline, by type code: 'd' number, 'e' enumeration,
    'A' / 'M' model (aircraft, mission). */
@@ -118,7 +121,8 @@ typedef struct {
   PyObject *names;     /* tuple of the parameter names (interned), for keywords */
   PyObject *defaults;  /* tuple of the default objects of the trailing parameters */
   PyObject *result;    /* named result type (a tuple subtype) or NULL: one float */
-  PyObject *last;      /* the last named result given, refilled when no one else holds it */
+  PyObject *spare[ACPF_SPARES]; /* the last named results given, refilled when no one else holds them */
+  int next_spare;      /* the slot the next new result takes */
   int nmin;            /* arguments without a default */
   PyObject *dict;
   vectorcallfunc vectorcall;
@@ -234,17 +238,19 @@ static int acpf_gather(const acpf_function *f, PyObject *const *args, Py_ssize_t
   return 1;
 }
 
-/* The named result: a tuple subtype without extra slots, of floats. When the
-   last one given is held by nothing but this function (the caller let it go,
-   or took a field and dropped it), it is refilled in place instead of a new
-   one being made, as zip() and enumerate() recycle their result tuples; so is
-   each float in it that nothing else holds. No one can tell the difference:
-   the object is unreachable but from here, and holds the values a new one
-   would. A tuple of floats never needs the cycle collector. */
+/* The named result: a tuple subtype without extra slots, of floats. When one
+   of the last results given is held by nothing but this function (the caller
+   let it go, took a field and dropped it, or stored the next one in its
+   place), it is refilled in place instead of a new one being made, as zip()
+   and enumerate() recycle their result tuples; so is each float in it that
+   nothing else holds. No one can tell the difference: the object is
+   unreachable but from here, and holds the values a new one would. */
 static PyObject *acpf_named(acpf_function *f, const double *out) {
   const int n = f->entry->nout;
-  PyObject *r = f->last;
-  if (r && Py_REFCNT(r) == 1) {
+  PyObject *r = NULL;
+  for (int k = 0; k < ACPF_SPARES && !r; k++)
+    if (f->spare[k] && Py_REFCNT(f->spare[k]) == 1) r = f->spare[k];
+  if (r) {
     for (int i = 0; i < n; i++) {
       PyObject *v = PyTuple_GET_ITEM(r, i);
       if (Py_REFCNT(v) == 1 && PyFloat_CheckExact(v)) {
@@ -269,7 +275,12 @@ static PyObject *acpf_named(acpf_function *f, const double *out) {
     }
     PyTuple_SET_ITEM(r, i, v);
   }
-  Py_XSETREF(f->last, Py_NewRef(r));
+  /* Floats only: it can be in no reference cycle, so the cycle collector need not
+     scan it (CPython untracks such tuples itself, but only when it meets them in
+     a collection; a notebook keeping 1e5 results would pay for those scans). */
+  PyObject_GC_UnTrack(r);
+  Py_XSETREF(f->spare[f->next_spare], Py_NewRef(r));
+  f->next_spare = (f->next_spare + 1) % ACPF_SPARES;
   return r;
 }
 
@@ -372,7 +383,7 @@ static int acpf_traverse(acpf_function *f, visitproc visit, void *arg) {
   Py_VISIT(f->names);
   Py_VISIT(f->defaults);
   Py_VISIT(f->result);
-  Py_VISIT(f->last);
+  for (int k = 0; k < ACPF_SPARES; k++) Py_VISIT(f->spare[k]);
   Py_VISIT(f->dict);
   return 0;
 }
@@ -382,7 +393,7 @@ static int acpf_clear(acpf_function *f) {
   Py_CLEAR(f->names);
   Py_CLEAR(f->defaults);
   Py_CLEAR(f->result);
-  Py_CLEAR(f->last);
+  for (int k = 0; k < ACPF_SPARES; k++) Py_CLEAR(f->spare[k]);
   Py_CLEAR(f->dict);
   return 0;
 }

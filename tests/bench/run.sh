@@ -2,7 +2,8 @@
 # One command for the benchmark table: builds a Release tree in build-bench (with
 # the Python binding when SWIG and numpy are there), runs the C benchmark (1e6
 # points, 21 repetitions; model kernels on fewer points or calls) and the Python
-# comparison, and writes build-bench/results.csv, results.md and python.txt.
+# comparison (times, and instructions per scalar call when valgrind is there),
+# and writes build-bench/results.csv, results.md and python.txt.
 # Usage, from the top of the repository:   sh tests/bench/run.sh
 set -eu
 cd "$(dirname "$0")/../.."
@@ -25,4 +26,8 @@ cat "$out/results.md"
 if [ "$python" = ON ]; then
   PYTHONPATH=build-bench/bindings/python /usr/bin/python3 tests/bench/bench_python.py \
     build-bench/libperf/libacperf.so build-bench/tests/bench/acperf_bench | tee "$out/python.txt"
+  if command -v valgrind >/dev/null 2>&1; then
+    PYTHONPATH=build-bench/bindings/python /usr/bin/python3 tests/bench/instructions_python.py |
+      tee -a "$out/python.txt"
+  fi
 fi
