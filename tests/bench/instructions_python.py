@@ -7,17 +7,18 @@ after a build with the Python binding:
 
     PYTHONPATH=build-bench/bindings/python /usr/bin/python3 tests/bench/instructions_python.py
 
-Each statement runs in a loop of N1 and of N2 calls in a fresh interpreter; the
-difference over N2 - N1 is its count per call, start-up cancelled. The C
-function's own count per call (acperf._fast.c_loop, the same inputs) and the
-empty loop's are taken off, leaving what the Python side costs per call: the
-call, the argument conversion and the result objects.
+Each statement runs in a loop of N calls in a fresh interpreter; the count of
+a run of no calls (start-up, import, set-up) is taken off and the rest divided
+by N. The C function's own count per call (acperf._fast.c_loop, N calls in C
+with the same inputs) and the empty loop's are taken off too, leaving what the
+Python side costs per call: the call, the argument conversion and the result
+objects.
 """
 
 import subprocess
 import sys
 
-N1, N2 = 20_000, 120_000
+N = 100_000
 
 NAMES = ("acperf", "jet", "jet_handle", "capi", "x", "d", "w", "kept")
 SETUP = f"""
@@ -62,22 +63,26 @@ def instructions(body, n):
     return int(next(line for line in out.splitlines() if "Collected" in line).split()[-1])
 
 
-def per_call(body):
-    return (instructions(body, N2) - instructions(body, N1)) / (N2 - N1)
+START = {}
+
+
+def per_call(body, n=N):
+    if "start" not in START:
+        START["start"] = instructions("pass", 0)
+    return (instructions(body, n) - START["start"]) / n
 
 
 def main():
     empty = per_call("pass")
-    print(f"Instructions per call under callgrind (loops of {N1:,} and {N2:,}; "
+    print(f"Instructions per call under callgrind (loops of {N:,} calls; "
           f"empty loop {empty:.0f} taken off)")
     print(f"  {'statement':48s} {'total':>7s} {'C':>6s} {'Python side':>12s}")
     c_cost = 0.0
     for label, c_case, stmt in CASES:
         if c_case is not None:
             name, args = c_case
-            # one more C call per loop turn: c_loop of 2 calls against c_loop of 1
-            c_cost = (per_call(f"acperf._fast.c_loop({name!r}, {args}, 2, True)")
-                      - per_call(f"acperf._fast.c_loop({name!r}, {args}, 1, True)"))
+            # N calls in C, in one loop turn
+            c_cost = per_call(f"acperf._fast.c_loop({name!r}, {args}, {N}, True)", 1) / N
         total = per_call(stmt) - empty
         print(f"  {label:48s} {total:7.0f} {c_cost:6.0f} {total - c_cost:12.0f}")
 
