@@ -11,10 +11,12 @@ VMR > VMD > VMP is a property of any parabolic drag polar (common practice:
 VMP = 3^-1/4 VMD and VMR = 3^1/4 VMD for D = A V^2 + B/V^2).
 """
 
+import copy
 import ctypes
 import inspect
 import itertools
 import math
+import pickle
 import warnings
 
 import numpy as np
@@ -131,6 +133,21 @@ def test_aircraft_keys_and_constructors(pair):
     text = demo_aircraft_path().read_text()
     assert acperf.Aircraft.from_text(text).to_dict() == \
         acperf.Aircraft.from_file(demo_aircraft_path()).to_dict()
+
+
+def test_aircraft_copy_deepcopy_and_pickle_give_models_of_their_own(pair):
+    # each is a new C model with the same keys (hence the same drag bits); changing
+    # one leaves the other; a mission cannot be copied and says so
+    ac, _ = pair
+    want = acperf.drag(ac, 30000.0, 3000.0, 0.0, 150.0)
+    for other in (copy.copy(ac), copy.deepcopy(ac), pickle.loads(pickle.dumps(ac))):
+        assert type(other) is acperf.Aircraft and other._handle is not ac._handle
+        assert other.to_dict() == ac.to_dict()
+        assert acperf.drag(other, 30000.0, 3000.0, 0.0, 150.0) == want
+        other["wing_area"] = 2.0 * ac["wing_area"]
+        assert acperf.drag(ac, 30000.0, 3000.0, 0.0, 150.0) == want
+    with pytest.raises(TypeError):
+        copy.copy(acperf.Mission())
 
 
 def test_aircraft_from_dict_nested_and_copy():

@@ -74,6 +74,17 @@ class Aircraft(_fast.model):
         _c.acp_aircraft_copy(other._handle, self._handle)
         return other
 
+    # copy.copy, copy.deepcopy and pickle (multiprocessing): a new model of its own,
+    # never a second owner of the same C object
+    def __copy__(self):
+        return self.copy()
+
+    def __deepcopy__(self, memo):
+        return self.copy()
+
+    def __reduce__(self):
+        return (Aircraft.from_dict, (self.to_dict(),))
+
     # ---- keys ----------------------------------------------------------------
     def __getitem__(self, key):
         if _is_text_key(key):
