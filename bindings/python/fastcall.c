@@ -79,7 +79,8 @@ static PyObject *acpf_model_attach(PyObject *self, PyObject *args) {
   if (!number) return NULL;
   void *address = PyLong_AsVoidPtr(number);
   Py_DECREF(number);
-  if (!address) return PyErr_Occurred() ? NULL : PyErr_Format(PyExc_ValueError, "_attach: NULL handle");
+  if (!address)
+    return PyErr_Occurred() ? NULL : PyErr_Format(PyExc_ValueError, "_attach: NULL handle");
   acpf_model *m = (acpf_model *)self;
   m->address = address;
   m->kind = (char)kind;
@@ -121,7 +122,7 @@ typedef struct {
   PyObject *names;     /* tuple of the parameter names (interned), for keywords */
   PyObject *defaults;  /* tuple of the default objects of the trailing parameters */
   PyObject *result;    /* named result type (a tuple subtype) or NULL: one float */
-  PyObject *spare[ACPF_SPARES]; /* the last named results given, refilled when no one else holds them */
+  PyObject *spare[ACPF_SPARES]; /* the last named results, refilled when no one else holds them */
   int next_spare;      /* the slot the next new result takes */
   int nmin;            /* arguments without a default */
   PyObject *dict;
@@ -339,7 +340,8 @@ static PyObject *acpf_new(PyTypeObject *type, PyObject *args, PyObject *kwds) {
     if (!PyFloat_CheckExact(PyTuple_GET_ITEM(defaults, i)) || e->types[e->nin - ndef + i] != 'd')
       return PyErr_Format(PyExc_TypeError, "%s: defaults must be floats for numbers", name);
   if (result == Py_None) {
-    if (e->nout != 1) return PyErr_Format(PyExc_ValueError, "%s: several outputs need a result type", name);
+    if (e->nout != 1)
+      return PyErr_Format(PyExc_ValueError, "%s: several outputs need a result type", name);
     result = NULL;
   } else {
     PyTypeObject *t = (PyTypeObject *)result;
@@ -556,7 +558,8 @@ static PyObject *acpf_c_loop(PyObject *module, PyObject *args) {
   }
   clock_gettime(CLOCK_MONOTONIC, &t1);
   (void)sink;
-  return PyFloat_FromDouble((double)(t1.tv_sec - t0.tv_sec) + 1e-9 * (double)(t1.tv_nsec - t0.tv_nsec));
+  return PyFloat_FromDouble((double)(t1.tv_sec - t0.tv_sec) +
+                            1e-9 * (double)(t1.tv_nsec - t0.tv_nsec));
 }
 
 static PyMethodDef module_methods[] = {

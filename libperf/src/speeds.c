@@ -55,16 +55,36 @@ static double slope_at(const search *s, enum objective obj, double v) {
   return (objective_at(s, obj, v + h) - objective_at(s, obj, v - h)) / (2.0 * h);
 }
 
+/* The tabulated speeds of the coarse search: GRID speeds in geometric steps
+   from s->vlo to s->vhi (ratio: the step). */
+static double grid_ratio(const search *s) { return pow(s->vhi / s->vlo, 1.0 / (GRID - 1)); }
+static double grid_speed(const search *s, double ratio, int i) {
+  return i == GRID - 1 ? s->vhi : s->vlo * pow(ratio, i);
+}
+
+/* Drag at each tabulated speed, shared by the drag, power and range searches
+   (objective_at gives the same numbers from it: D, D v, D / v). */
+static void grid_drag(const search *s, double *drag) {
+  const double ratio = grid_ratio(s);
+  for (int i = 0; i < GRID; ++i)
+    drag[i] = polar_drag(s->ac, &s->atm, s->weight, grid_speed(s, ratio, i));
+}
+
+static double objective_from_drag(enum objective obj, double drag, double v) {
+  return obj == OBJ_POWER ? drag * v : obj == OBJ_RANGE ? drag / v : drag;
+}
+
 /* The speed minimising obj between s->vlo and s->vhi; ACP_ERR_RANGE when the
-   least tabulated value is at an end or nothing could be evaluated. */
-static int minimise(const search *s, enum objective obj, double *vbest) {
+   least tabulated value is at an end or nothing could be evaluated. drag: the
+   grid_drag() of s for the drag, power and range objectives, or NULL. */
+static int minimise(const search *s, enum objective obj, const double *drag, double *vbest) {
   *vbest = ACP_NAN;
-  const double ratio = pow(s->vhi / s->vlo, 1.0 / (GRID - 1));
+  const double ratio = grid_ratio(s);
   double best = INFINITY;
   int ibest = -1;
   for (int i = 0; i < GRID; ++i) {
-    const double v = i == GRID - 1 ? s->vhi : s->vlo * pow(ratio, i);
-    const double f = objective_at(s, obj, v);
+    const double v = grid_speed(s, ratio, i);
+    const double f = drag ? objective_from_drag(obj, drag[i], v) : objective_at(s, obj, v);
     if (f < best) {
       best = f;
       ibest = i;
@@ -109,9 +129,11 @@ int acp_speeds(const acp_aircraft *ac, double mass, double hp, double dtemp,
   search s;
   int st = setup(&s, ac, mass, hp, dtemp);
   if (st != ACP_OK) return st;
-  st = first_error(st, minimise(&s, OBJ_DRAG, &out->vmd));
-  st = first_error(st, minimise(&s, OBJ_POWER, &out->vmp));
-  st = first_error(st, minimise(&s, OBJ_RANGE, &out->vmr));
+  double drag[GRID]; /* evaluated once for the three searches */
+  grid_drag(&s, drag);
+  st = first_error(st, minimise(&s, OBJ_DRAG, drag, &out->vmd));
+  st = first_error(st, minimise(&s, OBJ_POWER, drag, &out->vmp));
+  st = first_error(st, minimise(&s, OBJ_RANGE, drag, &out->vmr));
   if (!isnan(out->vmd)) out->ld_max = s.weight / polar_drag(ac, &s.atm, s.weight, out->vmd);
   const double cl_max = ac->v[AK_CL_MAX];
   if (!isnan(cl_max))
@@ -196,7 +218,7 @@ int acp_glide(const acp_aircraft *ac, double mass, double hp, double dtemp, acp_
   int st = setup(&s, ac, mass, hp, dtemp);
   if (st != ACP_OK) return st;
   double v;
-  int st1 = minimise(&s, OBJ_GLIDE_ANGLE, &v);
+  int st1 = minimise(&s, OBJ_GLIDE_ANGLE, NULL, &v);
   if (st1 == ACP_OK) {
     const double g = glide_angle(&s, v);
     if (isnan(g)) {
@@ -207,7 +229,7 @@ int acp_glide(const acp_aircraft *ac, double mass, double hp, double dtemp, acp_
       out->best_glide_sink_rate = v * sin(g);
     }
   }
-  int st2 = minimise(&s, OBJ_SINK, &v);
+  int st2 = minimise(&s, OBJ_SINK, NULL, &v);
   if (st2 == ACP_OK) {
     const double g = glide_angle(&s, v);
     if (isnan(g)) {
@@ -254,7 +276,7 @@ int acp_speed_stability(const acp_aircraft *ac, double mass, double hp, double d
   if (!isfinite(slope)) return ACP_ERR_RANGE; /* also a difference that overflows */
   out->slope = slope;
   out->stable = slope > 0.0 ? 1.0 : slope < 0.0 ? -1.0 : 0.0;
-  return minimise(&s, OBJ_DRAG, &out->vmd);
+  return minimise(&s, OBJ_DRAG, NULL, &out->vmd);
 }
 
 size_t acp_speed_stability_n(const acp_aircraft *ac, size_t n, const double *mass,
@@ -285,7 +307,7 @@ size_t acp_speed_stability_boundary_n(const acp_aircraft *ac, size_t n, const do
       search s;
       const double dt = acp_opt(dtemp, i, 0.0);
       st = setup(&s, ac, mass[i], hp[i], dt);
-      if (st == ACP_OK) st = minimise(&s, OBJ_DRAG, &v);
+      if (st == ACP_OK) st = minimise(&s, OBJ_DRAG, NULL, &v);
       if (st == ACP_OK) {
         cas = acp_tas_to_cas(v, hp[i], dt);
         mach = acp_tas_to_mach(v, hp[i], dt);
