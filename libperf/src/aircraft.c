@@ -10,6 +10,7 @@
 #include "acperf/polar.h"
 #include "acperf/status.h"
 #include "aircraft_internal.h"
+#include "friction_internal.h"
 #include "internal.h"
 
 #define PI 3.14159265358979323846
@@ -126,6 +127,16 @@ static int find_key(const ac_keydef *table, int count, const char *name) {
 void ac_clear(acp_aircraft *ac) {
   memset(ac, 0, sizeof *ac);
   for (int i = 0; i < AK_COUNT; ++i) ac->v[i] = ACP_NAN;
+  ac_derive(ac);
+}
+
+void ac_derive(acp_aircraft *ac) {
+  for (size_t i = 0; i < ac->ncomp; ++i) {
+    ac_component *c = &ac->comp[i];
+    c->cutoff_base = friction_cutoff_base(comp_value(c, CK_LENGTH), comp_value(c, CK_ROUGHNESS));
+    c->sweep_factor = friction_sweep_factor(comp_value(c, CK_SWEEP_MAX_THICKNESS));
+  }
+  ac->induced_factor = polar_induced_factor(ac);
 }
 
 static void comp_clear(ac_component *c) {
@@ -304,12 +315,16 @@ int acp_aircraft_copy(acp_aircraft *dst, const acp_aircraft *src) {
 int acp_aircraft_set(acp_aircraft *ac, const char *key, double value) {
   if (!ac || !key) return ACP_ERR_INVALID;
   if (polar_derived_key(key)) return ACP_ERR_INVALID;
-  return ac_set(ac, key, value, NULL, 0);
+  const int st = ac_set(ac, key, value, NULL, 0);
+  ac_derive(ac);
+  return st;
 }
 
 int acp_aircraft_set_text(acp_aircraft *ac, const char *key, const char *value) {
   if (!ac || !key || !value) return ACP_ERR_INVALID;
-  return ac_set_text(ac, key, value, NULL, 0);
+  const int st = ac_set_text(ac, key, value, NULL, 0);
+  ac_derive(ac);
+  return st;
 }
 
 int acp_aircraft_get(const acp_aircraft *ac, const char *key, double *value) {
@@ -357,8 +372,16 @@ int acp_aircraft_get_text(const acp_aircraft *ac, const char *key, char *buf, si
   return ACP_ERR_UNKNOWN_KEY;
 }
 
+static int unset(acp_aircraft *ac, const char *key);
+
 int acp_aircraft_unset(acp_aircraft *ac, const char *key) {
   if (!ac || !key) return ACP_ERR_INVALID;
+  const int st = unset(ac, key);
+  ac_derive(ac);
+  return st;
+}
+
+static int unset(acp_aircraft *ac, const char *key) {
   if (strcmp(key, "name") == 0) {
     ac->name[0] = '\0';
     return ACP_OK;

@@ -101,6 +101,10 @@ typedef struct {
   char name[ACP_COMPONENT_NAME_MAX];
   unsigned line;        /* line of its section in the parsed text; 0 when set by key */
   double v[CK_COUNT];   /* NaN: not given */
+  /* Derived by ac_derive(): the parts of the build-up that depend on the model
+     alone, so that a drag evaluation does not compute them again. */
+  double cutoff_base;   /* friction_cutoff_base(length, roughness) */
+  double sweep_factor;  /* friction_sweep_factor(sweep_max_thickness) */
 } ac_component;
 
 struct acp_aircraft {
@@ -108,6 +112,7 @@ struct acp_aircraft {
   double v[AK_COUNT];   /* NaN: not given */
   size_t ncomp;
   ac_component comp[ACP_AIRCRAFT_MAX_COMPONENTS];
+  double induced_factor; /* derived by ac_derive(): polar_induced_factor() */
 };
 
 /* Value of an aircraft key or its default (NaN when neither). */
@@ -117,6 +122,10 @@ double comp_value(const ac_component *c, enum comp_key k);
 
 /* Reset to the empty model. */
 void ac_clear(acp_aircraft *ac);
+
+/* Recompute the derived members from the values: after every change of a model
+   that can be evaluated (the public setters, the parser, ac_clear). */
+void ac_derive(acp_aircraft *ac);
 
 /* Completeness and consistency: ACP_OK or ACP_ERR_INVALID with a message. */
 int ac_check(const acp_aircraft *ac, char *err, size_t errlen);
@@ -140,6 +149,10 @@ int ac_valid_name(const char *name, size_t n);
    polar.c: whether key is one, and its value (status as acp_aircraft_get). */
 int polar_derived_key(const char *key);
 int polar_derived_value(const acp_aircraft *ac, const char *key, double *value);
+
+/* The induced-drag factor k = 1 / (pi A_eff e) of the model's values (NaN when
+   they are incomplete); what ac_derive() keeps in ac->induced_factor. */
+double polar_induced_factor(const acp_aircraft *ac);
 
 /* The polar of a checked aircraft (ac_check() == ACP_OK) in air atm at
    true airspeed tas (m/s) with lift (N): ACP_OK or ACP_ERR_RANGE (Mach or a

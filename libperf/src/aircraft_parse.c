@@ -287,6 +287,7 @@ static int parser_end(parser *p, acp_aircraft *ac) {
   if (ac_check(&p->ac, why, sizeof why) != ACP_OK)
     return fail(p, 0, "incomplete aircraft at the end of the text: %s", why);
   memcpy(ac, &p->ac, sizeof *ac);
+  ac_derive(ac);
   return ACP_OK;
 }
 

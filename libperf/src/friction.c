@@ -37,8 +37,11 @@ double acp_skin_friction_mixed(double reynolds, double mach, double laminar_frac
          (1.0 - laminar_fraction) * acp_skin_friction_turbulent(reynolds, mach);
 }
 
-static double cutoff_reynolds(double length, double roughness, const friction_mach *f) {
-  const double base = pow(length / roughness, 1.053);
+double friction_cutoff_base(double length, double roughness) {
+  return roughness > 0.0 ? pow(length / roughness, 1.053) : ACP_NAN;
+}
+
+static double cutoff_reynolds(double base, const friction_mach *f) {
   const double subsonic = 38.21 * base;
   const double transonic = 44.62 * base * f->roughness_mach;
   const double cutoff = fmax(subsonic, transonic);
@@ -51,16 +54,16 @@ double acp_roughness_cutoff_reynolds(double length, double roughness, double mac
     return ACP_NAN;
   friction_mach f;
   friction_mach_init(mach, &f);
-  return cutoff_reynolds(length, roughness, &f);
+  return cutoff_reynolds(friction_cutoff_base(length, roughness), &f);
 }
 
 double friction_skin(double reynolds, const friction_mach *f, double laminar_fraction,
-                     double length, double roughness) {
+                     double cutoff_base) {
   if (!reynolds_ok(reynolds)) return ACP_NAN;
   double re_turb = reynolds;
-  if (roughness > 0.0) {
+  if (!isnan(cutoff_base)) { /* roughness given */
     /* NaN here is a cutoff past the largest double: no limit */
-    const double cutoff = cutoff_reynolds(length, roughness, f);
+    const double cutoff = cutoff_reynolds(cutoff_base, f);
     if (!isnan(cutoff)) re_turb = fmin(reynolds, fmax(cutoff, ACP_REYNOLDS_MIN));
   }
   return laminar_fraction * acp_skin_friction_laminar(reynolds) +
@@ -75,14 +78,18 @@ double acp_skin_friction(double reynolds, double mach, double laminar_fraction, 
     return ACP_NAN;
   friction_mach f;
   friction_mach_init(mach, &f);
-  return friction_skin(reynolds, &f, laminar_fraction, length, roughness);
+  return friction_skin(reynolds, &f, laminar_fraction, friction_cutoff_base(length, roughness));
+}
+
+double friction_sweep_factor(double sweep_max_thickness) {
+  return pow(cos(sweep_max_thickness), 0.28);
 }
 
 double friction_form_surface(double thickness_ratio, double max_thickness_position,
-                             double sweep_max_thickness, const friction_mach *f) {
+                             double sweep_factor, const friction_mach *f) {
   const double tc = thickness_ratio;
   const double shape = 1.0 + 0.6 / max_thickness_position * tc + 100.0 * tc * tc * tc * tc;
-  return shape * f->form_mach * pow(cos(sweep_max_thickness), 0.28);
+  return shape * f->form_mach * sweep_factor;
 }
 
 double acp_form_factor_surface(double thickness_ratio, double max_thickness_position,
@@ -93,7 +100,8 @@ double acp_form_factor_surface(double thickness_ratio, double max_thickness_posi
     return ACP_NAN;
   friction_mach f;
   friction_mach_init(mach, &f);
-  return friction_form_surface(thickness_ratio, max_thickness_position, sweep_max_thickness, &f);
+  return friction_form_surface(thickness_ratio, max_thickness_position,
+                               friction_sweep_factor(sweep_max_thickness), &f);
 }
 
 double acp_form_factor_body(double fineness_ratio) {

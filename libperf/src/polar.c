@@ -88,7 +88,7 @@ static double oswald_used(const acp_aircraft *ac) {
   return isnan(e) ? acp_oswald_estimate(aspect_ratio(ac), ac_value(ac, AK_SWEEP_LE)) : e;
 }
 
-static double induced_factor(const acp_aircraft *ac) {
+double polar_induced_factor(const acp_aircraft *ac) {
   const double a_eff =
       acp_winglet_aspect_ratio(aspect_ratio(ac), ac_value(ac, AK_WINGLET_HEIGHT), ac->v[AK_SPAN]);
   return 1.0 / (PI * a_eff * oswald_used(ac));
@@ -120,7 +120,7 @@ int polar_derived_value(const acp_aircraft *ac, const char *key, double *value) 
   else if (strcmp(key, "oswald_effective") == 0)
     *value = oswald_used(ac);
   else if (strcmp(key, "induced_factor") == 0)
-    *value = induced_factor(ac);
+    *value = polar_induced_factor(ac);
   return ACP_OK;
 }
 
@@ -132,15 +132,13 @@ static int component_factors(const ac_component *c, const acp_atmos *atm, double
                              const friction_mach *fm, acp_component_drag *cd) {
   const double length = comp_value(c, CK_LENGTH);
   const double re = atm->density * tas * length / atm->dynamic_viscosity;
-  const double cf = friction_skin(re, fm, comp_value(c, CK_LAMINAR_FRACTION), length,
-                                  comp_value(c, CK_ROUGHNESS));
+  const double cf = friction_skin(re, fm, comp_value(c, CK_LAMINAR_FRACTION), c->cutoff_base);
   double ff = c->v[CK_FORM_FACTOR];
   if (isnan(ff)) {
     switch ((int)c->v[CK_TYPE]) {
     case ACP_COMPONENT_SURFACE:
       ff = friction_form_surface(comp_value(c, CK_THICKNESS_RATIO),
-                                 comp_value(c, CK_MAX_THICKNESS_POSITION),
-                                 comp_value(c, CK_SWEEP_MAX_THICKNESS), fm);
+                                 comp_value(c, CK_MAX_THICKNESS_POSITION), c->sweep_factor, fm);
       break;
     case ACP_COMPONENT_BODY: ff = acp_form_factor_body(comp_value(c, CK_FINENESS_RATIO)); break;
     case ACP_COMPONENT_NACELLE:
@@ -205,7 +203,7 @@ int polar_eval(const acp_aircraft *ac, const acp_atmos *atm, double lift, double
     pp->cd_misc = ac_value(ac, AK_CD_MISC);
     cd0 = pp->cd_friction + pp->cd_form + pp->cd_interference + pp->cd_leakage + pp->cd_misc;
   }
-  const double k = induced_factor(ac);
+  const double k = ac->induced_factor; /* ac_derive(): polar_induced_factor(ac) */
   const double dcl = cl - ac_value(ac, AK_CL_MIN_DRAG);
   double cdw = 0.0;
   if (!isnan(ac->v[AK_KORN_KAPPA])) {

@@ -25,6 +25,85 @@ static const char *BUILDUP = "wing_area = 20\nspan = 12\n"
                              "[ component . body ]  # blanks around the dot are TOML too\n"
                              "type = 'body'\nwetted_area = 30\nlength = 8\nfineness_ratio = 8\n";
 
+/* The drag at a few flight conditions, as raw bytes (acp_drag_parts is doubles). */
+typedef struct {
+  acp_drag_parts parts[4];
+} drag_sample;
+
+static drag_sample sample_drag(const acp_aircraft *ac) {
+  drag_sample d;
+  const double hp[2] = {0.0, 3000.0}, tas[2] = {60.0, 120.0};
+  for (int i = 0; i < 4; ++i)
+    assert_int_equal(acp_drag(ac, 5000.0, hp[i / 2], 0.0, tas[i % 2], &d.parts[i]), ACP_OK);
+  return d;
+}
+
+static acp_aircraft *parsed(const char *text) {
+  acp_aircraft *ac = acp_aircraft_new();
+  char err[200];
+  assert_non_null(ac);
+  assert_int_equal(acp_aircraft_parse(ac, text, err, sizeof err), ACP_OK);
+  return ac;
+}
+
+#define ROUGH_WING "wing_area = 20\nspan = 12\ncl_max = 1.5\n" \
+  "[component.wing]\ntype = \"surface\"\nwetted_area = 40\nlength = 2\n" \
+  "thickness_ratio = 0.12\nsweep_max_thickness = 0.3\n"
+#define BODY "[component.body]\ntype = \"body\"\nwetted_area = 30\nlength = 8\n" \
+  "fineness_ratio = 8\n"
+
+/* The model keeps the parts of the drag build-up that depend on it alone (the
+   roughness cutoff's (l/k)^1.053, the sweep factor cos^0.28, the induced-drag
+   factor); every setter must bring them up to date. A model changed key by key
+   must give the same bits as one read from the text of its final values, and a
+   copy as its original. */
+static void test_changed_model_drags_as_a_fresh_one(void **state) {
+  (void)state;
+  acp_aircraft *ac = parsed(ROUGH_WING "roughness = 1.0e-5\n" BODY);
+  const drag_sample before = sample_drag(ac);
+  assert_int_equal(acp_aircraft_set(ac, "component.wing.roughness", 4.0e-5), ACP_OK);
+  assert_int_equal(acp_aircraft_set(ac, "component.wing.sweep_max_thickness", 0.1), ACP_OK);
+  assert_int_equal(acp_aircraft_set(ac, "component.body.roughness", 2.0e-5), ACP_OK);
+  assert_int_equal(acp_aircraft_set(ac, "span", 13.0), ACP_OK);
+  assert_int_equal(acp_aircraft_set(ac, "winglet_height", 0.5), ACP_OK);
+  assert_int_equal(acp_aircraft_set(ac, "sweep_leading_edge", 0.4), ACP_OK);
+  const char *final_text = "wing_area = 20\nspan = 13\ncl_max = 1.5\nwinglet_height = 0.5\n"
+                           "sweep_leading_edge = 0.4\n[component.wing]\ntype = \"surface\"\n"
+                           "wetted_area = 40\nlength = 2\nthickness_ratio = 0.12\n"
+                           "sweep_max_thickness = 0.1\nroughness = 4.0e-5\n" BODY
+                           "roughness = 2.0e-5\n";
+  acp_aircraft *fresh = parsed(final_text);
+  drag_sample got = sample_drag(ac), want = sample_drag(fresh);
+  assert_memory_not_equal(&got, &before, sizeof got); /* the changes change the drag */
+  assert_memory_equal(&got, &want, sizeof got);
+  /* a copy carries them */
+  acp_aircraft *copy = acp_aircraft_new();
+  assert_int_equal(acp_aircraft_copy(copy, ac), ACP_OK);
+  got = sample_drag(copy);
+  assert_memory_equal(&got, &want, sizeof got);
+  /* unset: a component key back to its default, then a whole component */
+  assert_int_equal(acp_aircraft_unset(ac, "component.wing.roughness"), ACP_OK);
+  assert_int_equal(acp_aircraft_unset(ac, "winglet_height"), ACP_OK);
+  acp_aircraft_free(fresh);
+  fresh = parsed("wing_area = 20\nspan = 13\ncl_max = 1.5\nsweep_leading_edge = 0.4\n"
+                 "[component.wing]\ntype = \"surface\"\nwetted_area = 40\nlength = 2\n"
+                 "thickness_ratio = 0.12\nsweep_max_thickness = 0.1\n" BODY
+                 "roughness = 2.0e-5\n");
+  got = sample_drag(ac);
+  want = sample_drag(fresh);
+  assert_memory_equal(&got, &want, sizeof got);
+  assert_int_equal(acp_aircraft_unset(ac, "component.wing"), ACP_OK);
+  acp_aircraft_free(fresh);
+  fresh = parsed("wing_area = 20\nspan = 13\ncl_max = 1.5\nsweep_leading_edge = 0.4\n" BODY
+                 "roughness = 2.0e-5\n");
+  got = sample_drag(ac);
+  want = sample_drag(fresh);
+  assert_memory_equal(&got, &want, sizeof got);
+  acp_aircraft_free(fresh);
+  acp_aircraft_free(copy);
+  acp_aircraft_free(ac);
+}
+
 static void test_model_keys(void **state) {
   (void)state;
   acp_aircraft *ac = acp_aircraft_new();
@@ -386,6 +465,7 @@ static void test_parse_fuzz(void **state) {
 int main(void) {
   const struct CMUnitTest tests[] = {
       cmocka_unit_test(test_model_keys),   cmocka_unit_test(test_key_listing_and_copy),
+      cmocka_unit_test(test_changed_model_drags_as_a_fresh_one),
       cmocka_unit_test(test_parse_good),   cmocka_unit_test(test_parse_errors),
       cmocka_unit_test(test_load),         cmocka_unit_test(test_parse_fuzz),
   };
