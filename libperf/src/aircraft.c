@@ -137,6 +137,7 @@ void ac_derive(acp_aircraft *ac) {
     c->sweep_factor = friction_sweep_factor(comp_value(c, CK_SWEEP_MAX_THICKNESS));
   }
   ac->induced_factor = polar_induced_factor(ac);
+  ac->check_status = ac_check(ac, NULL, 0);
 }
 
 static void comp_clear(ac_component *c) {

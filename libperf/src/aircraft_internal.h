@@ -113,6 +113,7 @@ struct acp_aircraft {
   size_t ncomp;
   ac_component comp[ACP_AIRCRAFT_MAX_COMPONENTS];
   double induced_factor; /* derived by ac_derive(): polar_induced_factor() */
+  int check_status;      /* derived by ac_derive(): ac_check() without its message */
 };
 
 /* Value of an aircraft key or its default (NaN when neither). */

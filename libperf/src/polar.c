@@ -264,7 +264,7 @@ int polar_condition(const acp_aircraft *ac, double mass, double hp, double dtemp
   if (!isfinite(mass) || !isfinite(tas) || !isfinite(load_factor)) return ACP_ERR_INVALID;
   const int st = acp_isa(hp, dtemp, atm);
   if (st != ACP_OK) return st;
-  if (ac_check(ac, NULL, 0) != ACP_OK) return ACP_ERR_INVALID;
+  if (ac->check_status != ACP_OK) return ACP_ERR_INVALID; /* ac_derive(): ac_check() */
   if (!acp_in_range(mass, ACP_POLAR_MASS_MIN, ACP_POLAR_MASS_MAX) || !(tas > 0.0) ||
       !acp_in_range(load_factor, 0.0, ACP_POLAR_LOAD_MAX))
     return ACP_ERR_RANGE;

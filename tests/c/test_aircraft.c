@@ -92,6 +92,13 @@ static void test_changed_model_drags_as_a_fresh_one(void **state) {
   got = sample_drag(ac);
   want = sample_drag(fresh);
   assert_memory_equal(&got, &want, sizeof got);
+  /* an incomplete model is refused, and accepted again when complete */
+  acp_drag_parts parts;
+  assert_int_equal(acp_aircraft_unset(ac, "span"), ACP_OK);
+  assert_int_equal(acp_drag(ac, 5000.0, 0.0, 0.0, 60.0, &parts), ACP_ERR_INVALID);
+  assert_int_equal(acp_aircraft_set(ac, "span", 13.0), ACP_OK);
+  got = sample_drag(ac);
+  assert_memory_equal(&got, &want, sizeof got);
   assert_int_equal(acp_aircraft_unset(ac, "component.wing"), ACP_OK);
   acp_aircraft_free(fresh);
   fresh = parsed("wing_area = 20\nspan = 13\ncl_max = 1.5\nsweep_leading_edge = 0.4\n" BODY
