@@ -108,7 +108,8 @@ static void profiles(contract *c, const acp_aircraft *ac, double mass, double dt
 /* A small climb table: the count of cells without a result, time, distance
    and fuel NaN together, each altitude's cell not below the one before, and
    on a demo aircraft with the default step each cell within 1e-4 of
-   acp_climb() from hp_start (climb.h). */
+   acp_climb() from hp_start, or within its integration error near the
+   ceiling (climb.h). */
 static void table(contract *c, const acp_aircraft *ac, int fuzzed, double dt, double wind) {
   const char *fn = "acp_climb_table";
   const double h0 = contract_range(c, -500.0, 3000.0);
@@ -134,11 +135,22 @@ static void table(contract *c, const acp_aircraft *ac, int fuzzed, double dt, do
       contract_expect(c, t[1] >= t[0] && f[1] >= f[0], fn, "a higher altitude reached sooner or with less fuel");
     if (!fuzzed && step == 0.0)
       for (size_t j = 0; j < 2; ++j) {
-        acp_profile r;
+        acp_profile r, half;
         const int st = acp_climb(ac, ms[i], h0, hs[j], dt, wind, 0.0, &r);
-        if (st == ACP_OK && !isnan(t[j])) {
-          contract_close(c, fn, "time against acp_climb()", t[j], r.time, 1e-6, 1e-4);
-          contract_close(c, fn, "fuel against acp_climb()", f[j], r.fuel, 1e-6, 1e-4);
+        const int sh = acp_climb(ac, ms[i], h0, hs[j], dt, wind, 0.5 * ACP_CLIMB_STEP_DEFAULT, &half);
+        if (st == ACP_OK && sh == ACP_OK && !isnan(t[j])) {
+          /* Both integrate the same climb with the steps falling differently: they
+             agree to 1e-4 where the climb is far from the ceiling, and otherwise
+             within the integration's error, which grows as the top nears the
+             ceiling (1/rate of climb is the integrand). Twice that error, with a
+             margin, is three times the change of acp_climb() when its step is
+             halved (a 42 t climb at ISA+60 to 168 ft/min at the top: the cell
+             is 0.29 s from acp_climb() over 2,501 s, the halving changes it by
+             0.77 s). */
+          const double dt_time = 3.0 * fabs(r.time - half.time);
+          const double dt_fuel = 3.0 * fabs(r.fuel - half.fuel);
+          contract_close(c, fn, "time against acp_climb()", t[j], r.time, fmax(1e-6, dt_time), 1e-4);
+          contract_close(c, fn, "fuel against acp_climb()", f[j], r.fuel, fmax(1e-6, dt_fuel), 1e-4);
         }
       }
   }
