@@ -47,8 +47,9 @@ double acp_winglet_aspect_ratio(double aspect_ratio, double winglet_height, doub
   if (!(isfinite(aspect_ratio) && aspect_ratio > 0.0) || !(isfinite(span) && span > 0.0) ||
       !acp_in_range(winglet_height, 0.0, 0.5 * span))
     return ACP_NAN;
-  /* h/b first: it is exact at h = b/2, where 1.9 h of a denormal h rounds */
-  const double a = aspect_ratio * (1.0 + 1.9 * (winglet_height / span));
+  /* h/b first: it is exact at h = b/2, where 1.9 h of a denormal h rounds; held
+     to 1/2, which an odd denormal b passes above (its b/2 rounds up) */
+  const double a = aspect_ratio * (1.0 + 1.9 * fmin(winglet_height / span, 0.5));
   return isfinite(a) ? a : ACP_NAN; /* overflow (a huge A) is no result */
 }
 

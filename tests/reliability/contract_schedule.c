@@ -67,6 +67,7 @@ void contract_schedule(contract *c) {
   contract_value(c, "acp_acceleration_factor", g, F_MIN, 20.0);
   const int ok = (m == ACP_MODE_CAS || m == ACP_MODE_MACH) && mm > 0.0 && mm <= ACP_MACH_MAX && atm_ok;
   contract_expect(c, ok == !isnan(g), "acp_acceleration_factor", "NaN exactly outside its domain");
-  if (ok && m == ACP_MODE_MACH && hp >= 11000.0 && hp <= 20000.0)
+  /* 11 to 20 km, the top excluded: at 20 km the layer above (+1 K/km) begins */
+  if (ok && m == ACP_MODE_MACH && hp >= 11000.0 && hp < 20000.0)
     contract_close(c, "acp_acceleration_factor", "constant Mach, isothermal layer: 1", g, 1.0, 1e-15, 0);
 }
