@@ -39,11 +39,16 @@ static double glide_angle(const search *s, double v) {
   return ACP_NAN;
 }
 
+/* The drag, power and range objectives from the drag at TAS v: D, D v, D / v. */
+static double objective_from_drag(enum objective obj, double drag, double v) {
+  return obj == OBJ_POWER ? drag * v : obj == OBJ_RANGE ? drag / v : drag;
+}
+
 static double objective_at(const search *s, enum objective obj, double v) {
   switch (obj) {
-  case OBJ_DRAG: return polar_drag(s->ac, &s->atm, s->weight, v);
-  case OBJ_POWER: return polar_drag(s->ac, &s->atm, s->weight, v) * v;
-  case OBJ_RANGE: return polar_drag(s->ac, &s->atm, s->weight, v) / v;
+  case OBJ_DRAG:
+  case OBJ_POWER:
+  case OBJ_RANGE: return objective_from_drag(obj, polar_drag(s->ac, &s->atm, s->weight, v), v);
   case OBJ_GLIDE_ANGLE: return glide_angle(s, v);
   case OBJ_SINK: return v * sin(glide_angle(s, v));
   }
@@ -63,15 +68,11 @@ static double grid_speed(const search *s, double ratio, int i) {
 }
 
 /* Drag at each tabulated speed, shared by the drag, power and range searches
-   (objective_at gives the same numbers from it: D, D v, D / v). */
+   (objective_from_drag makes each objective from it, as objective_at does). */
 static void grid_drag(const search *s, double *drag) {
   const double ratio = grid_ratio(s);
   for (int i = 0; i < GRID; ++i)
     drag[i] = polar_drag(s->ac, &s->atm, s->weight, grid_speed(s, ratio, i));
-}
-
-static double objective_from_drag(enum objective obj, double drag, double v) {
-  return obj == OBJ_POWER ? drag * v : obj == OBJ_RANGE ? drag / v : drag;
 }
 
 /* The speed minimising obj between s->vlo and s->vhi; ACP_ERR_RANGE when the
