@@ -607,7 +607,9 @@ static void test_fuzz_regressions(void **state) {
               "winglet h = b/2 denormal");
   /* an odd denormal span: b/2 rounds up, so h <= b/2 passed with h/b above 1/2
      and A_eff was 58.50000000002 for A 30, above 1.95 A (found by fuzz.models,
-     second session); h/b is now held to 1/2 */
+     second session); h/b is now held to 1/2. The bound: A_eff = A (1 + 1.9 h/b)
+     with h <= b/2, Raymer section 12.6 after Hoerner (polar.h); the inputs are
+     the fuzzer's, not published values. */
   assert_true(acp_winglet_aspect_ratio(30.0, 2.7116964027602346e-312, 5.4233928055155285e-312) <=
               1.95 * 30.0);
   assert_true(acp_winglet_aspect_ratio(30.0, 4.1623982254824546e-315, 8.3247964460242528e-315) <=
