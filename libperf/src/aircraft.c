@@ -473,6 +473,24 @@ static int check_component(const ac_component *c, char *err, size_t errlen) {
   return ACP_OK;
 }
 
+/* The mass limits that are given rise: operating empty <= maximum zero-fuel
+   <= maximum landing <= maximum take-off (what each means makes it so). */
+static int check_mass_order(const acp_aircraft *ac, char *err, size_t errlen) {
+  static const enum ac_key chain[] = {AK_MASS_OPERATING_EMPTY, AK_MASS_MAX_ZERO_FUEL,
+                                      AK_MASS_MAX_LANDING, AK_MASS_MAX_TAKEOFF};
+  const size_t n = sizeof chain / sizeof chain[0];
+  for (size_t i = 0; i < n; ++i)
+    for (size_t j = i + 1; j < n; ++j)
+      if (ac->v[chain[i]] > ac->v[chain[j]]) { /* NaN (not given) compares false */
+        msg(err, errlen,
+            "'%s' (%.0f kg) is above '%s' (%.0f kg): the mass limits must rise, operating "
+            "empty <= maximum zero-fuel <= maximum landing <= maximum take-off",
+            AC_KEYS[chain[i]].name, ac->v[chain[i]], AC_KEYS[chain[j]].name, ac->v[chain[j]]);
+        return ACP_ERR_INVALID;
+      }
+  return ACP_OK;
+}
+
 int ac_check(const acp_aircraft *ac, char *err, size_t errlen) {
   msg(err, errlen, "%s", "");
   for (int k = 0; k < AK_COUNT; ++k)
@@ -518,7 +536,7 @@ int ac_check(const acp_aircraft *ac, char *err, size_t errlen) {
     const int st = check_component(&ac->comp[i], err, errlen);
     if (st != ACP_OK) return st;
   }
-  return ACP_OK;
+  return check_mass_order(ac, err, errlen);
 }
 
 int acp_aircraft_check(const acp_aircraft *ac, char *err, size_t errlen) {

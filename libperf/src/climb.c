@@ -21,6 +21,8 @@ typedef struct {
   const acp_aircraft *ac;
   int descent;
   double dtemp, wind;
+  double mass_floor; /* perf_mass_floor(): no point of a profile below it */
+  perf_limit *lim;   /* where a limit found exceeded is told */
 } phase;
 
 /* Schedules change mode (speed limit, crossover) at an altitude, and the
@@ -44,6 +46,11 @@ static int schedule_at(const phase *ph, double hp, acp_schedule_point *s) {
    level speed change (rate 0). */
 static int forces(const phase *ph, double mass, double hp, double tas, double f,
                   acp_profile_point *p) {
+  if (!(mass >= ph->mass_floor)) {
+    ph->lim->code = ACP_LIMIT_MASS_OPERATING_EMPTY;
+    ph->lim->excess = ph->mass_floor - mass;
+    return ACP_ERR_RANGE;
+  }
   acp_atmos at;
   int st = acp_isa(hp, ph->dtemp, &at);
   if (st != ACP_OK) return st;
@@ -53,19 +60,25 @@ static int forces(const phase *ph, double mass, double hp, double tas, double f,
   if (st != ACP_OK) return st;
   const double drag = polar_drag(ph->ac, &at, mass * ACP_G0, tas);
   if (isnan(drag)) return ACP_ERR_RANGE;
+  const double cas = acp_mach_to_cas(mach, hp);
+  if (perf_speed_envelope(ph->ac, perf_lift_coefficient(ph->ac, mass, &at, tas), mach, cas,
+                          ph->lim) != ACP_OK)
+    return ACP_ERR_RANGE;
   const double roc = f > 0.0 ? (e.thrust - drag) * tas / (mass * ACP_G0 * f) : 0.0;
   const double gamma = asin(fmax(-1.0, fmin(1.0, roc / tas)));
   p->hp = hp;
   p->mass = mass;
   p->tas = tas;
   p->mach = mach;
-  p->cas = acp_mach_to_cas(mach, hp);
+  p->cas = cas;
   p->rate = roc * (at.temperature - ph->dtemp) / at.temperature; /* geometric to pressure */
   p->gradient = gamma;
   p->thrust = e.thrust;
   p->drag = drag;
   p->fuel_flow = e.fuel_flow;
   p->acceleration_factor = f;
+  p->limit = ACP_LIMIT_NONE;
+  p->limit_excess = 0.0;
   return ACP_OK;
 }
 
@@ -108,19 +121,24 @@ static int usable(const phase *ph, const acp_profile_point *p) {
   return ACP_OK;
 }
 
-/* Trapezoid on d(t, x, m)/d(variable) with a predicted then corrected end mass. */
-static int advance(const phase *ph, run *r, double dvar, double rate0, double rate1,
-                   const acp_profile_point *p1) {
-  const acp_profile_point *p0 = &r->cur;
-  const double dt = 0.5 * dvar * (1.0 / rate0 + 1.0 / rate1);
-  const double dx = 0.5 * dvar * (ground_speed(ph, p0) / rate0 + ground_speed(ph, p1) / rate1);
-  const double dm = 0.5 * dvar * (p0->fuel_flow / rate0 + p1->fuel_flow / rate1);
+/* The one place where a step is booked, altitude steps and level speed
+   changes alike: p1 becomes the current point, with the time, distance and
+   mass of the point before plus dt and dx and less dm. Time runs forward,
+   fuel is burnt, never added, and the mass stays above the floor. */
+static int book(const phase *ph, run *r, const acp_profile_point *p1, double dt, double dx,
+                double dm) {
   if (!(dt > 0.0) || !(dm >= 0.0)) return ACP_ERR_RANGE;
-  const double t = p0->time + dt, x = p0->distance + dx;
+  const double t = r->cur.time + dt, x = r->cur.distance + dx, m = r->cur.mass - dm;
+  if (!(m >= ph->mass_floor)) {
+    ph->lim->code = ACP_LIMIT_MASS_OPERATING_EMPTY;
+    ph->lim->excess = ph->mass_floor - m;
+    return ACP_ERR_RANGE;
+  }
   r->cur = *p1;
   r->cur.time = t;
   r->cur.distance = x;
-  r->cur.mass = p0->mass - dm;
+  r->cur.mass = m;
+  record(r);
   return ACP_OK;
 }
 
@@ -156,44 +174,47 @@ static int altitude_segment(const phase *ph, run *r, double h1, size_t n) {
                            ground_speed(ph, &p1) / p1.rate);
     const double dm = w * (p0.fuel_flow / p0.rate + 4.0 * pm.fuel_flow / pm.rate +
                            p1.fuel_flow / p1.rate);
-    if (!(dt > 0.0) || !(dm >= 0.0)) return ACP_ERR_RANGE;
-    r->cur = p1;
-    r->cur.time = p0.time + dt;
-    r->cur.distance = p0.distance + dx;
-    r->cur.mass = p0.mass - dm;
-    record(r);
+    st = book(ph, r, &p1, dt, dx, dm);
+    if (st != ACP_OK) return st;
   }
   return ACP_OK;
 }
 
 /* Level acceleration (climb) or deceleration (descent) at the current altitude
-   to TAS v1: dt/dV = m/(T - D), in SPEED_CHANGE_STEPS steps. */
+   to TAS v1, in SPEED_CHANGE_STEPS steps of TAS: the trapezoidal rule on
+   dt/dV = m/(T - D), dx/dV = (ground speed) dt/dV and dm/dV = (fuel flow)
+   dt/dV, the end mass of each step predicted by an Euler step. */
 static int speed_segment(const phase *ph, run *r, double v1, double mode) {
   const double v0 = r->cur.tas, t0 = r->cur.time, x0 = r->cur.distance, m0 = r->cur.mass;
   acp_profile_point p0;
   int st = forces(ph, r->cur.mass, r->cur.hp, v0, 0.0, &p0);
   if (st != ACP_OK) return st;
-  p0.time = r->cur.time;
-  p0.distance = r->cur.distance;
+  p0.time = t0;
+  p0.distance = x0;
+  p0.mode = r->cur.mode;
   r->cur = p0;
   for (int i = 1; i <= SPEED_CHANGE_STEPS; ++i) {
+    const acp_profile_point *a = &r->cur;
     const double v = v0 + (v1 - v0) * i / SPEED_CHANGE_STEPS;
-    const double dv = v - r->cur.tas;
-    const double acc0 = (r->cur.thrust - r->cur.drag) / r->cur.mass;
+    const double dv = v - a->tas;
+    const double acc0 = (a->thrust - a->drag) / a->mass;
     acp_profile_point p1;
-    st = forces(ph, r->cur.mass - r->cur.fuel_flow * dv / acc0, r->cur.hp, v, 0.0, &p1);
+    st = forces(ph, a->mass - a->fuel_flow * dv / acc0, a->hp, v, 0.0, &p1);
     if (st != ACP_OK) return st;
     const double acc1 = (p1.thrust - p1.drag) / p1.mass;
     /* climbing must accelerate, descending decelerate, with at least the
        specific excess power (T - D) V/W of RATE_MIN (else the speed change
        takes unbounded time, as a climb below RATE_MIN would) */
-    const double ps0 = acc0 * r->cur.tas / ACP_G0, ps1 = acc1 * v / ACP_G0;
+    const double ps0 = acc0 * a->tas / ACP_G0, ps1 = acc1 * v / ACP_G0;
     if (ph->descent ? !(ps0 < -RATE_MIN && ps1 < -RATE_MIN) : !(ps0 > RATE_MIN && ps1 > RATE_MIN))
       return ACP_ERR_THRUST;
     p1.mode = mode;
-    st = advance(ph, r, dv, acc0, acc1, &p1);
+    const double w = 0.5 * dv;
+    const double dt = w * (1.0 / acc0 + 1.0 / acc1);
+    const double dx = w * (ground_speed(ph, a) / acc0 + ground_speed(ph, &p1) / acc1);
+    const double dm = w * (a->fuel_flow / acc0 + p1.fuel_flow / acc1);
+    st = book(ph, r, &p1, dt, dx, dm);
     if (st != ACP_OK) return st;
-    record(r);
   }
   r->speed_change_time += r->cur.time - t0;
   r->speed_change_distance += r->cur.distance - x0;
@@ -249,6 +270,9 @@ static plan make_plan(const phase *ph, double h0, double h1, double step) {
     if (next == h1 || p.nseg == PLAN_MAX) break;
     from = next;
   }
+  /* symmetric with the climb: a descent to the limit altitude ends on the
+     low-side speed, so it decelerates there last (and one from there starts slow) */
+  if (ph->descent && fabs(h1 - p.limit) <= 1e-6 && h0 > p.limit) p.change_after = p.nseg - 1;
   return p;
 }
 
@@ -258,60 +282,33 @@ static size_t plan_points(const plan *p) {
   return n;
 }
 
-static void set_nan_profile(acp_profile *o) {
-  o->time = o->distance = o->fuel = o->mass_end = o->tas_end = ACP_NAN;
-  o->speed_change_time = o->speed_change_distance = o->speed_change_fuel = ACP_NAN;
+/* The level speed change at the limit altitude onto the schedule beyond it. */
+static int change_at_limit(const phase *ph, run *r, double limit, double side) {
+  acp_profile_point next;
+  const int st = scheduled_side(ph, r->cur.mass, limit, side, &next);
+  return st == ACP_OK ? speed_segment(ph, r, next.tas, next.mode) : st;
 }
 
-static int check_args(const acp_aircraft *ac, double mass, double h0, double h1, double dtemp,
-                      double wind, double *step) {
-  if (!ac || !isfinite(mass) || !isfinite(h0) || !isfinite(h1) || !isfinite(dtemp) ||
-      !isfinite(wind) || !isfinite(*step))
-    return ACP_ERR_INVALID;
-  if (perf_check(ac, NULL, 0) != ACP_OK) return ACP_ERR_INVALID;
-  if (*step == 0.0) *step = ACP_CLIMB_STEP_DEFAULT;
-  if (!acp_in_range(*step, 10.0, 1000.0) || !acp_in_range(mass, ACP_POLAR_MASS_MIN, ACP_POLAR_MASS_MAX) ||
-      !acp_in_range(wind, -WIND_MAX, WIND_MAX))
-    return ACP_ERR_RANGE;
-  acp_atmos at;
-  int st = acp_isa(h0, dtemp, &at);
-  return st == ACP_OK ? acp_isa(h1, dtemp, &at) : st;
-}
-
-static int profile(const acp_aircraft *ac, int descent, double mass, double h0, double h1,
-                   double dtemp, double wind, double step, size_t capacity,
-                   acp_profile_point *points, size_t *count, acp_profile *out) {
-  if (!out) return ACP_ERR_INVALID;
-  set_nan_profile(out);
-  int st = check_args(ac, mass, h0, h1, dtemp, wind, &step);
-  if (st != ACP_OK) return st;
-  if (descent ? !(h1 < h0) : !(h1 > h0)) return ACP_ERR_INVALID;
-  const phase ph = {ac, descent, dtemp, wind};
-  const plan pl = make_plan(&ph, h0, h1, step);
+/* The profile from h0 to h1 along the plan (arguments checked). */
+static int integrate(const phase *ph, double mass, double h0, double h1, double step,
+                     size_t capacity, acp_profile_point *points, size_t *count,
+                     acp_profile *out) {
+  const plan pl = make_plan(ph, h0, h1, step);
   if (count) {
     *count = plan_points(&pl);
     if (capacity < *count) return ACP_ERR_RANGE;
   }
   run r = {.trace = points, .capacity = capacity};
-  const double side = descent ? -SIDE : SIDE;
-  st = scheduled_side(&ph, mass, h0, pl.change_first ? -SIDE : side, &r.cur);
-  if (st == ACP_OK) st = usable(&ph, &r.cur);
+  const double side = ph->descent ? -SIDE : SIDE;
+  int st = scheduled_side(ph, mass, h0, pl.change_first ? -SIDE : side, &r.cur);
+  if (st == ACP_OK) st = usable(ph, &r.cur);
   if (st != ACP_OK) return st;
   r.cur.time = r.cur.distance = 0.0;
   record(&r);
-  if (pl.change_first) {
-    acp_profile_point next;
-    st = scheduled_side(&ph, r.cur.mass, pl.limit, side, &next);
-    if (st == ACP_OK) st = speed_segment(&ph, &r, next.tas, next.mode);
-    if (st != ACP_OK) return st;
-  }
+  if (pl.change_first) st = change_at_limit(ph, &r, pl.limit, side);
   for (size_t k = 0; k < pl.nseg && st == ACP_OK; ++k) {
-    st = altitude_segment(&ph, &r, pl.end[k], pl.steps[k]);
-    if (st != ACP_OK || k != pl.change_after) continue;
-    /* level speed change at the limit onto the schedule beyond it */
-    acp_profile_point next;
-    st = scheduled_side(&ph, r.cur.mass, pl.limit, side, &next);
-    if (st == ACP_OK) st = speed_segment(&ph, &r, next.tas, next.mode);
+    st = altitude_segment(ph, &r, pl.end[k], pl.steps[k]);
+    if (st == ACP_OK && k == pl.change_after) st = change_at_limit(ph, &r, pl.limit, side);
   }
   if (st != ACP_OK) return st;
   out->time = r.cur.time;
@@ -326,34 +323,84 @@ static int profile(const acp_aircraft *ac, int descent, double mass, double h0, 
   return ACP_OK;
 }
 
+static void set_nan_profile(acp_profile *o) {
+  o->time = o->distance = o->fuel = o->mass_end = o->tas_end = ACP_NAN;
+  o->speed_change_time = o->speed_change_distance = o->speed_change_fuel = ACP_NAN;
+  o->limit = o->limit_excess = ACP_NAN;
+}
+
+/* Arguments of the point and profile functions, and the aircraft's mass and
+   altitude limits at h0 and h1 (lim set when one is exceeded). */
+static int check_args(const acp_aircraft *ac, double mass, double h0, double h1, double dtemp,
+                      double wind, double *step, unsigned relax, perf_limit *lim) {
+  lim->code = lim->excess = ACP_NAN;
+  if (!ac || !isfinite(mass) || !isfinite(h0) || !isfinite(h1) || !isfinite(dtemp) ||
+      !isfinite(wind) || !isfinite(*step))
+    return ACP_ERR_INVALID;
+  if (perf_check(ac, NULL, 0) != ACP_OK) return ACP_ERR_INVALID;
+  if (*step == 0.0) *step = ACP_CLIMB_STEP_DEFAULT;
+  if (!acp_in_range(*step, 10.0, 1000.0) || !acp_in_range(mass, ACP_POLAR_MASS_MIN, ACP_POLAR_MASS_MAX) ||
+      !acp_in_range(wind, -WIND_MAX, WIND_MAX))
+    return ACP_ERR_RANGE;
+  acp_atmos at;
+  int st = acp_isa(h0, dtemp, &at);
+  if (st == ACP_OK) st = acp_isa(h1, dtemp, &at);
+  if (st == ACP_OK) st = perf_envelope(ac, mass, fmax(h0, h1), relax, lim);
+  return st;
+}
+
+static int profile(const acp_aircraft *ac, int descent, double mass, double h0, double h1,
+                   double dtemp, double wind, double step, unsigned relax, size_t capacity,
+                   acp_profile_point *points, size_t *count, acp_profile *out) {
+  if (!out) return ACP_ERR_INVALID;
+  set_nan_profile(out);
+  perf_limit lim;
+  int st = check_args(ac, mass, h0, h1, dtemp, wind, &step, relax, &lim);
+  if (st == ACP_OK && (descent ? !(h1 < h0) : !(h1 > h0))) st = ACP_ERR_INVALID;
+  if (st == ACP_OK) {
+    const phase ph = {ac, descent, dtemp, wind, perf_mass_floor(ac), &lim};
+    st = integrate(&ph, mass, h0, h1, step, capacity, points, count, out);
+  }
+  if (st != ACP_OK) set_nan_profile(out);
+  perf_limit_report(st, &lim, &out->limit, &out->limit_excess);
+  return st;
+}
+
+int perf_profile(const acp_aircraft *ac, int descent, double mass, double hp_start, double hp_end,
+                 double dtemp, double wind, double step, unsigned relax, acp_profile *out) {
+  return profile(ac, descent, mass, hp_start, hp_end, dtemp, wind, step, relax, 0, NULL, NULL,
+                 out);
+}
+
 int acp_climb(const acp_aircraft *ac, double mass, double hp_start, double hp_end, double dtemp,
               double wind, double step, acp_profile *out) {
-  return profile(ac, 0, mass, hp_start, hp_end, dtemp, wind, step, 0, NULL, NULL, out);
+  return profile(ac, 0, mass, hp_start, hp_end, dtemp, wind, step, 0u, 0, NULL, NULL, out);
 }
 
 int acp_climb_trace(const acp_aircraft *ac, double mass, double hp_start, double hp_end,
                     double dtemp, double wind, double step, size_t capacity,
                     acp_profile_point *points, size_t *count, acp_profile *out) {
   if (!count || (capacity > 0 && !points)) return ACP_ERR_INVALID;
-  return profile(ac, 0, mass, hp_start, hp_end, dtemp, wind, step, capacity, points, count, out);
+  return profile(ac, 0, mass, hp_start, hp_end, dtemp, wind, step, 0u, capacity, points, count, out);
 }
 
 int acp_descent(const acp_aircraft *ac, double mass, double hp_start, double hp_end,
                 double dtemp, double wind, double step, acp_profile *out) {
-  return profile(ac, 1, mass, hp_start, hp_end, dtemp, wind, step, 0, NULL, NULL, out);
+  return profile(ac, 1, mass, hp_start, hp_end, dtemp, wind, step, 0u, 0, NULL, NULL, out);
 }
 
 int acp_descent_trace(const acp_aircraft *ac, double mass, double hp_start, double hp_end,
                       double dtemp, double wind, double step, size_t capacity,
                       acp_profile_point *points, size_t *count, acp_profile *out) {
   if (!count || (capacity > 0 && !points)) return ACP_ERR_INVALID;
-  return profile(ac, 1, mass, hp_start, hp_end, dtemp, wind, step, capacity, points, count, out);
+  return profile(ac, 1, mass, hp_start, hp_end, dtemp, wind, step, 0u, capacity, points, count, out);
 }
 
 static void set_nan_point(acp_profile_point *p) {
   p->time = p->distance = p->hp = p->mass = p->tas = p->cas = p->mach = ACP_NAN;
   p->rate = p->gradient = p->thrust = p->drag = p->fuel_flow = ACP_NAN;
   p->acceleration_factor = p->mode = ACP_NAN;
+  p->limit = p->limit_excess = ACP_NAN;
 }
 
 static int point(const acp_aircraft *ac, int descent, double mass, double hp, double dtemp,
@@ -361,12 +408,15 @@ static int point(const acp_aircraft *ac, int descent, double mass, double hp, do
   if (!out) return ACP_ERR_INVALID;
   set_nan_point(out);
   double step = ACP_CLIMB_STEP_DEFAULT;
-  int st = check_args(ac, mass, hp, hp, dtemp, wind, &step);
-  if (st != ACP_OK) return st;
-  const phase ph = {ac, descent, dtemp, wind};
-  st = scheduled(&ph, mass, hp, out);
+  perf_limit lim;
+  int st = check_args(ac, mass, hp, hp, dtemp, wind, &step, 0u, &lim);
+  if (st == ACP_OK) {
+    const phase ph = {ac, descent, dtemp, wind, perf_mass_floor(ac), &lim};
+    st = scheduled(&ph, mass, hp, out);
+  }
   if (st != ACP_OK) {
     set_nan_point(out);
+    perf_limit_report(st, &lim, &out->limit, &out->limit_excess);
     return st;
   }
   out->time = out->distance = 0.0;
@@ -420,16 +470,24 @@ static double sar_at(const acp_aircraft *ac, double mass, double hp, double dtem
   return perf_sar(ac, mass, &at, ac_value(ac, AK_CRUISE_MACH) * at.sound_speed, 0.0);
 }
 
-/* Altitude of the greatest SAR below top: a 100 m scan, then golden section. */
-static double optimum_altitude(const acp_aircraft *ac, double mass, double dtemp, double top) {
+/* Altitude of the greatest SAR at or below top where level flight holds: a
+   100 m scan, then golden section on the best point's neighbours, returning
+   the best altitude evaluated (so never one where level flight fails). *binds
+   says what holds it: ACP_ALTITUDE_LIMIT_NONE (an inner maximum), top_code
+   (within 1 m of top) or ACP_ALTITUDE_LIMIT_THRUST (level flight fails 1 m
+   above: the turbofan's SAR rises up to its cruise-thrust ceiling). */
+static double optimum_altitude(const acp_aircraft *ac, double mass, double dtemp, double top,
+                               double top_code, double *binds) {
   double best = ACP_NAN, best_h = ACP_NAN;
-  for (int k = 0; k * 100.0 <= top; ++k) {
-    const double h = k * 100.0;
+  *binds = ACP_NAN;
+  for (int k = 0; k * 100.0 <= top + 100.0; ++k) {
+    const double h = fmin(k * 100.0, top);
     const double s = sar_at(ac, mass, h, dtemp);
     if (!isnan(s) && (isnan(best) || s > best)) {
       best = s;
       best_h = h;
     }
+    if (h == top) break;
   }
   if (isnan(best_h)) return ACP_NAN;
   double a = fmax(0.0, best_h - 100.0), b = fmin(top, best_h + 100.0);
@@ -437,20 +495,30 @@ static double optimum_altitude(const acp_aircraft *ac, double mass, double dtemp
   while (b - a > 0.01) {
     const double c = a + g * (b - a), d = b - g * (b - a);
     const double sc = sar_at(ac, mass, c, dtemp), sd = sar_at(ac, mass, d, dtemp);
+    if (!isnan(sc) && sc > best) best = sc, best_h = c;
+    if (!isnan(sd) && sd > best) best = sd, best_h = d;
     if (isnan(sd) || sc > sd) b = d; else a = c;
   }
-  return 0.5 * (a + b);
+  if (top - best_h <= 1.0)
+    *binds = top_code;
+  else
+    *binds = isnan(sar_at(ac, mass, best_h + 1.0, dtemp)) ? ACP_ALTITUDE_LIMIT_THRUST
+                                                          : ACP_ALTITUDE_LIMIT_NONE;
+  return best_h;
 }
 
 int acp_ceilings(const acp_aircraft *ac, double mass, double dtemp, acp_ceiling_set *out) {
   if (!out) return ACP_ERR_INVALID;
   out->service_ceiling = out->max_climb_altitude = out->buffet_altitude = ACP_NAN;
   out->max_cruise_altitude = out->optimum_altitude = ACP_NAN;
+  out->optimum_limit = out->best_cruise_altitude = out->best_cruise_limit = ACP_NAN;
+  out->max_cruise_limit = ACP_NAN;
   double step = ACP_CLIMB_STEP_DEFAULT;
-  int st = check_args(ac, mass, 0.0, 0.0, dtemp, 0.0, &step);
+  perf_limit lim;
+  int st = check_args(ac, mass, 0.0, 0.0, dtemp, 0.0, &step, 0u, &lim);
   if (st != ACP_OK) return st;
   if (isnan(ac_value(ac, AK_CRUISE_MACH))) return ACP_ERR_INVALID;
-  const phase ph = {ac, 0, dtemp, 0.0};
+  const phase ph = {ac, 0, dtemp, 0.0, perf_mass_floor(ac), &lim};
   /* 100 and 300 ft/min residual climb (common practice) */
   const double service = ceiling(&ph, mass, 100.0 * ACP_FPM);
   const double climb = ceiling(&ph, mass, 300.0 * ACP_FPM);
@@ -461,19 +529,26 @@ int acp_ceilings(const acp_aircraft *ac, double mass, double dtemp, acp_ceiling_
   const double m = ac_value(ac, AK_CRUISE_MACH);
   double buffet = ACP_NAN;
   if (!isnan(clb) &&
-      acp_isa_pressure_altitude(1.3 * mass * ACP_G0 / (0.7 * m * m * ac->v[AK_WING_AREA] * clb),
+      acp_isa_pressure_altitude(ACP_BUFFET_MARGIN * mass * ACP_G0 /
+                                    (0.7 * m * m * ac->v[AK_WING_AREA] * clb),
                                 &buffet) != ACP_OK)
     buffet = ACP_NAN;
   out->service_ceiling = service;
   out->max_climb_altitude = isinf(climb) ? ACP_NAN : climb;
   if (buffet > SEARCH_TOP) buffet = ACP_NAN; /* above the search range: NaN, as documented */
   out->buffet_altitude = buffet;
-  double top = SEARCH_TOP;
+  double top = SEARCH_TOP, top_code = ACP_ALTITUDE_LIMIT_NONE;
   const double limits[] = {out->max_climb_altitude, buffet, ac_value(ac, AK_MAX_ALTITUDE)};
+  const double codes[] = {ACP_ALTITUDE_LIMIT_CLIMB, ACP_ALTITUDE_LIMIT_BUFFET,
+                          ACP_ALTITUDE_LIMIT_MAX_ALTITUDE};
   for (size_t i = 0; i < 3; ++i)
-    if (!isnan(limits[i])) top = fmin(top, limits[i]);
+    if (limits[i] < top) top = limits[i], top_code = codes[i];
   out->max_cruise_altitude = top;
-  out->optimum_altitude = optimum_altitude(ac, mass, dtemp, isnan(service) ? SEARCH_TOP : service);
+  out->max_cruise_limit = top_code;
+  out->optimum_altitude = optimum_altitude(ac, mass, dtemp, isnan(service) ? SEARCH_TOP : service,
+                                           ACP_ALTITUDE_LIMIT_CLIMB, &out->optimum_limit);
+  out->best_cruise_altitude =
+      optimum_altitude(ac, mass, dtemp, top, top_code, &out->best_cruise_limit);
   return ACP_OK;
 }
 

@@ -22,7 +22,7 @@
 void cruise_point_nan(acp_cruise_point *p) {
   p->time = p->distance = p->hp = p->mass = p->tas = p->cas = p->mach = ACP_NAN;
   p->ground_speed = p->drag = p->fuel_flow = p->tsfc = p->lift_to_drag = p->sar = ACP_NAN;
-  p->limit = ACP_NAN;
+  p->limit = p->buffet_margin = p->limit_exceeded = p->limit_excess = ACP_NAN;
 }
 
 int cruise_cond_at(cruise_cond *c, const acp_aircraft *ac, double hp, double dtemp, double wind) {
@@ -45,7 +45,8 @@ int cruise_check(const acp_aircraft *ac, int mode, double cost_index, double mas
   return ACP_OK;
 }
 
-/* Level flight at tas: the whole point. */
+/* Level flight at tas: the whole point, inside the aircraft's speed limits
+   (cl_max, mmo, vmo: else ACP_ERR_RANGE with the limit in p). */
 static int level(const cruise_cond *c, double mass, double tas, int limit, acp_cruise_point *p) {
   double drag;
   acp_engine_point e;
@@ -55,12 +56,22 @@ static int level(const cruise_cond *c, double mass, double tas, int limit, acp_c
     cruise_point_nan(p);
     return st != ACP_OK ? st : ACP_ERR_RANGE;
   }
+  const double mach = tas / c->at.sound_speed, cas = acp_mach_to_cas(mach, c->hp);
+  const double cl = perf_lift_coefficient(c->ac, mass, &c->at, tas);
+  perf_limit lim;
+  if (perf_speed_envelope(c->ac, cl, mach, cas, &lim) != ACP_OK) {
+    cruise_point_nan(p);
+    p->limit_exceeded = lim.code;
+    p->limit_excess = lim.excess;
+    return ACP_ERR_RANGE;
+  }
+  const double clb = ac_value(c->ac, AK_CL_BUFFET);
   p->time = p->distance = 0.0;
   p->hp = c->hp;
   p->mass = mass;
   p->tas = tas;
-  p->mach = tas / c->at.sound_speed;
-  p->cas = acp_mach_to_cas(p->mach, c->hp);
+  p->mach = mach;
+  p->cas = cas;
   p->ground_speed = gs;
   p->drag = drag;
   p->fuel_flow = e.fuel_flow;
@@ -68,7 +79,21 @@ static int level(const cruise_cond *c, double mass, double tas, int limit, acp_c
   p->lift_to_drag = mass * ACP_G0 / drag;
   p->sar = gs / e.fuel_flow;
   p->limit = limit;
+  p->buffet_margin = (isnan(clb) ? ac_value(c->ac, AK_CL_MAX) : clb) / cl;
+  p->limit_exceeded = ACP_LIMIT_NONE;
+  p->limit_excess = 0.0;
   return ACP_OK;
+}
+
+/* The aircraft's limits at the start of a cruise (mass and altitude), told in p. */
+int cruise_envelope(const cruise_cond *c, double mass, acp_cruise_point *p) {
+  perf_limit lim;
+  const int st = perf_envelope(c->ac, mass, c->hp, 0u, &lim);
+  if (st != ACP_OK) {
+    p->limit_exceeded = lim.code;
+    p->limit_excess = lim.excess;
+  }
+  return st;
 }
 
 static double merit_of(int mode, double cost_index, double fuel_flow, double gs) {
@@ -222,6 +247,8 @@ static int minimise(const cruise_cond *c, int mode, double ci, double mass, doub
   int st = interval(c, mass, &lo, &hi, &hi_limit);
   if (st != ACP_OK) return st;
   *limit = ACP_CRUISE_LIMIT_NONE;
+  /* a headwind at least as strong as the fastest speed: no ground speed at all */
+  if (mode != ACP_CRUISE_MAX_ENDURANCE && !(hi + c->wind > 0.0)) return ACP_ERR_RANGE;
   if (hinted(c, mode, ci, mass, hint, lo, hi, v_best)) return ACP_OK;
   double v[GRID], f[GRID];
   int s[GRID];
@@ -399,6 +426,7 @@ int acp_cruise_speed(const acp_aircraft *ac, int mode, double cost_index, double
   int st = cruise_check(ac, mode, cost_index, mass, wind);
   cruise_cond c;
   if (st == ACP_OK) st = cruise_cond_at(&c, ac, hp, dtemp, wind);
+  if (st == ACP_OK) st = cruise_envelope(&c, mass, out);
   return st == ACP_OK ? cruise_speed_at(&c, mode, cost_index, mass, NULL, out) : st;
 }
 
@@ -429,9 +457,10 @@ int acp_specific_air_range(const acp_aircraft *ac, double mass, double hp, doubl
   int st = cruise_check(ac, ACP_CRUISE_MAX_RANGE, 0.0, mass, wind);
   cruise_cond c;
   if (st == ACP_OK) st = cruise_cond_at(&c, ac, hp, dtemp, wind);
+  acp_cruise_point p;
+  if (st == ACP_OK) st = cruise_envelope(&c, mass, &p);
   if (st != ACP_OK) return st;
   if (!(tas > 0.0) || tas > ACP_POLAR_MACH_MAX * c.at.sound_speed) return ACP_ERR_RANGE;
-  acp_cruise_point p;
   st = level(&c, mass, tas, ACP_CRUISE_LIMIT_NONE, &p);
   *sar = p.sar;
   return st;

@@ -27,6 +27,10 @@ int cruise_speed_at(const cruise_cond *c, int mode, double cost_index, double ma
    distance, cost per ground distance (economy) or fuel flow (endurance). */
 double cruise_merit(int mode, double cost_index, const acp_cruise_point *p);
 
+/* The aircraft's mass and altitude limits at the start of a cruise: ACP_OK, or
+   ACP_ERR_RANGE with the limit in p's limit_exceeded and limit_excess. */
+int cruise_envelope(const cruise_cond *c, double mass, acp_cruise_point *p);
+
 /* NaN in every field. */
 void cruise_point_nan(acp_cruise_point *p);
 

@@ -5,6 +5,7 @@
 #include "aircraft_internal.h"
 #include "cruise_internal.h"
 #include "internal.h"
+#include "performance_internal.h"
 
 #define STEPS_MAX 100000.0
 #define DISTANCE_MAX 2.0e7  /* m: half the Earth's circumference */
@@ -27,12 +28,22 @@ typedef struct {
   acp_cruise_result *out;
   acp_cruise_point *trace;
   size_t capacity, count;
+  double mass_floor;      /* perf_mass_floor(): no point below it */
+  perf_limit lim;         /* an aircraft limit found exceeded (NaN: none) */
+  double buffet_min;      /* least buffet margin of the points flown */
 } cruise_run;
 
 static void result_nan(acp_cruise_result *o) {
   o->time = o->distance = o->fuel = o->mass_end = o->hp_end = o->sar_mean = ACP_NAN;
   o->tas_start = o->tas_end = o->mach_start = o->mach_end = o->step_climbs = ACP_NAN;
   o->step_climb_time = o->step_climb_distance = o->step_climb_fuel = ACP_NAN;
+  o->limit = o->limit_excess = o->buffet_margin_min = ACP_NAN;
+}
+
+static int exceeded(cruise_run *r, double code, double excess) {
+  r->lim.code = code;
+  r->lim.excess = excess;
+  return ACP_ERR_RANGE;
 }
 
 static void record(cruise_run *r) {
@@ -43,10 +54,16 @@ static void record(cruise_run *r) {
 /* The mode's point at mass m on the current level, keeping time and distance. */
 static int point_at(const cruise_args *a, cruise_run *r, double m, double t, double x,
                     acp_cruise_point *p) {
+  if (!(m >= r->mass_floor)) return exceeded(r, ACP_LIMIT_MASS_OPERATING_EMPTY, r->mass_floor - m);
   const int st = cruise_speed_at(&r->c, a->mode, a->ci, m, r->hint, p);
+  if (st != ACP_OK) {
+    if (!isnan(p->limit_exceeded)) exceeded(r, p->limit_exceeded, p->limit_excess);
+    return st;
+  }
   p->time = t;
   p->distance = x;
-  return st;
+  if (!(p->buffet_margin >= r->buffet_min)) r->buffet_min = p->buffet_margin;
+  return ACP_OK;
 }
 
 /* One step of size h of the end quantity. */
@@ -77,7 +94,6 @@ static int advance(const cruise_args *a, cruise_run *r, double h) {
       x1 = p0->distance + h;
       t1 = p0->time + 0.5 * h * (1.0 / p0->ground_speed + 1.0 / p1.ground_speed);
     }
-    if (!(m1 >= ACP_POLAR_MASS_MIN)) return ACP_ERR_RANGE;
     st = point_at(a, r, m1, 0.0, 0.0, &p1);
     if (st != ACP_OK) return st;
   }
@@ -142,7 +158,7 @@ static double default_step(int end) {
                                         : ACP_CRUISE_STEP_TIME_DEFAULT;
 }
 
-static int check_args(cruise_args *a, double mass) {
+static int check_args(cruise_args *a, double mass, cruise_run *r) {
   if (!isfinite(a->end_value) || !isfinite(a->step) || !isfinite(a->step_climb))
     return ACP_ERR_INVALID;
   if (a->end < ACP_CRUISE_END_DISTANCE || a->end > ACP_CRUISE_END_TIME) return ACP_ERR_INVALID;
@@ -152,8 +168,10 @@ static int check_args(cruise_args *a, double mass) {
   if (a->step > a->end_value) a->step = a->end_value;
   if (a->step_climb != 0.0 && !acp_in_range(a->step_climb, STEP_CLIMB_MIN, STEP_CLIMB_MAX))
     return ACP_ERR_RANGE;
+  if (a->end == ACP_CRUISE_END_FUEL && !(a->end_value < mass - r->mass_floor))
+    return exceeded(r, ACP_LIMIT_MASS_OPERATING_EMPTY, a->end_value - (mass - r->mass_floor));
   const double hi = a->end == ACP_CRUISE_END_DISTANCE ? DISTANCE_MAX
-                    : a->end == ACP_CRUISE_END_FUEL   ? mass - ACP_POLAR_MASS_MIN
+                    : a->end == ACP_CRUISE_END_FUEL   ? INFINITY
                                                       : TIME_MAX;
   return a->end_value < hi ? ACP_OK : ACP_ERR_RANGE;
 }
@@ -168,55 +186,70 @@ static size_t points_needed(const cruise_args *a, double hp) {
   return n;
 }
 
-static int run(const acp_aircraft *ac, int mode, double cost_index, double mass, double hp,
-               double dtemp, double wind, int end, double end_value, double step,
-               double step_climb, size_t capacity, acp_cruise_point *points, size_t *count,
-               acp_cruise_result *out) {
-  cruise_args a = {ac, mode, end, cost_index, dtemp, wind, end_value, step, step_climb};
-  int st = cruise_check(ac, mode, cost_index, mass, wind);
-  if (st == ACP_OK) st = check_args(&a, mass);
-  cruise_run r;
-  if (st == ACP_OK) st = cruise_cond_at(&r.c, ac, hp, dtemp, wind);
-  if (st != ACP_OK) return st;
+/* The integration itself (arguments checked, r set up). */
+static int integrate(cruise_args *a, cruise_run *r, double mass, double hp, size_t capacity,
+                     acp_cruise_point *points, size_t *count, acp_cruise_result *out) {
   if (count) {
-    *count = points_needed(&a, hp);
+    *count = points_needed(a, hp);
     if (*count > capacity) return ACP_ERR_RANGE;
   }
-  r.out = out;
-  r.trace = points;
-  r.capacity = capacity;
-  r.count = 0;
-  r.progress = 0.0;
-  r.hint[0] = r.hint[1] = 0.0;
+  r->out = out;
+  r->trace = points;
+  r->capacity = capacity;
+  r->count = 0;
+  r->progress = 0.0;
+  r->hint[0] = r->hint[1] = 0.0;
   out->step_climbs = out->step_climb_time = out->step_climb_distance = out->step_climb_fuel = 0.0;
-  st = point_at(&a, &r, mass, 0.0, 0.0, &r.p);
+  int st = point_at(a, r, mass, 0.0, 0.0, &r->p);
   if (st != ACP_OK) return st;
-  record(&r);
-  const double tas0 = r.p.tas, mach0 = r.p.mach;
+  record(r);
+  const double tas0 = r->p.tas, mach0 = r->p.mach;
   /* Steps of a->step, the last one shortened; a step climb counts as progress,
      so the number of steps never exceeds ceil(end_value/step). */
-  while (a.end_value - r.progress > 1e-9 * a.step) {
-    st = advance(&a, &r, fmin(a.step, a.end_value - r.progress));
+  while (a->end_value - r->progress > 1e-9 * a->step) {
+    st = advance(a, r, fmin(a->step, a->end_value - r->progress));
     if (st != ACP_OK) return st;
-    if (a.step_climb > 0.0 && a.end_value - r.progress > 1e-9 * a.step) {
-      st = maybe_step_climb(&a, &r);
+    if (a->step_climb > 0.0 && a->end_value - r->progress > 1e-9 * a->step) {
+      st = maybe_step_climb(a, r);
       if (st != ACP_OK) return st;
     }
   }
   /* an end so small that no fuel is burnt has no mean SAR: out of range */
-  if (!(mass - r.p.mass > 0.0)) return ACP_ERR_RANGE;
-  out->time = r.p.time;
-  out->distance = r.p.distance;
-  out->fuel = mass - r.p.mass;
-  out->mass_end = r.p.mass;
-  out->hp_end = r.p.hp;
+  if (!(mass - r->p.mass > 0.0)) return ACP_ERR_RANGE;
+  out->time = r->p.time;
+  out->distance = r->p.distance;
+  out->fuel = mass - r->p.mass;
+  out->mass_end = r->p.mass;
+  out->hp_end = r->p.hp;
   out->sar_mean = out->distance / out->fuel;
   out->tas_start = tas0;
   out->mach_start = mach0;
-  out->tas_end = r.p.tas;
-  out->mach_end = r.p.mach;
-  if (count) *count = r.count;
+  out->tas_end = r->p.tas;
+  out->mach_end = r->p.mach;
+  out->buffet_margin_min = r->buffet_min;
+  if (count) *count = r->count;
   return ACP_OK;
+}
+
+/* Check, set up and integrate; *lim the aircraft limit found exceeded (NaN: none). */
+static int run(const acp_aircraft *ac, int mode, double cost_index, double mass, double hp,
+               double dtemp, double wind, int end, double end_value, double step,
+               double step_climb, size_t capacity, acp_cruise_point *points, size_t *count,
+               unsigned relax, acp_cruise_result *out, perf_limit *lim) {
+  cruise_args a = {ac, mode, end, cost_index, dtemp, wind, end_value, step, step_climb};
+  cruise_run r;
+  r.lim.code = r.lim.excess = ACP_NAN;
+  r.buffet_min = ACP_NAN;
+  int st = cruise_check(ac, mode, cost_index, mass, wind);
+  if (st == ACP_OK) {
+    r.mass_floor = perf_mass_floor(ac);
+    st = cruise_cond_at(&r.c, ac, hp, dtemp, wind);
+  }
+  if (st == ACP_OK && perf_envelope(ac, mass, hp, relax, &r.lim) != ACP_OK) st = ACP_ERR_RANGE;
+  if (st == ACP_OK) st = check_args(&a, mass, &r);
+  if (st == ACP_OK) st = integrate(&a, &r, mass, hp, capacity, points, count, out);
+  *lim = r.lim;
+  return st;
 }
 
 int acp_cruise_trace(const acp_aircraft *ac, int mode, double cost_index, double mass, double hp,
@@ -228,22 +261,33 @@ int acp_cruise_trace(const acp_aircraft *ac, int mode, double cost_index, double
   if (!count) return ACP_ERR_INVALID;
   *count = 0;
   if (!points && capacity > 0) return ACP_ERR_INVALID;
+  perf_limit lim;
   const int st = run(ac, mode, cost_index, mass, hp, dtemp, wind, end, end_value, step,
-                     step_climb, capacity, points, count, out);
+                     step_climb, capacity, points, count, 0u, out, &lim);
   if (st != ACP_OK) {
     result_nan(out);
     if (!(st == ACP_ERR_RANGE && *count > capacity)) *count = 0; /* keep "needed" only */
   }
+  perf_limit_report(st, &lim, &out->limit, &out->limit_excess);
+  return st;
+}
+
+int perf_cruise(const acp_aircraft *ac, int mode, double cost_index, double mass, double hp,
+                double dtemp, double wind, int end, double end_value, double step,
+                double step_climb, unsigned relax, acp_cruise_result *out) {
+  if (!out) return ACP_ERR_INVALID;
+  result_nan(out);
+  perf_limit lim;
+  const int st = run(ac, mode, cost_index, mass, hp, dtemp, wind, end, end_value, step,
+                     step_climb, 0, NULL, NULL, relax, out, &lim);
+  if (st != ACP_OK) result_nan(out);
+  perf_limit_report(st, &lim, &out->limit, &out->limit_excess);
   return st;
 }
 
 int acp_cruise(const acp_aircraft *ac, int mode, double cost_index, double mass, double hp,
                double dtemp, double wind, int end, double end_value, double step,
                double step_climb, acp_cruise_result *out) {
-  if (!out) return ACP_ERR_INVALID;
-  result_nan(out);
-  const int st = run(ac, mode, cost_index, mass, hp, dtemp, wind, end, end_value, step,
-                     step_climb, 0, NULL, NULL, out);
-  if (st != ACP_OK) result_nan(out);
-  return st;
+  return perf_cruise(ac, mode, cost_index, mass, hp, dtemp, wind, end, end_value, step, step_climb,
+                     0u, out);
 }

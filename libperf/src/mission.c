@@ -142,7 +142,19 @@ static int taxi_fuel(const acp_aircraft *ac, const acp_mission *ms, double *fuel
   return st;
 }
 
-/* Climb, cruise to the top of descent, descent (no mass limits checked). */
+/* An error of a segment as the trip's reason, where an aircraft limit names one:
+   fuel burnt to below the empty mass, a speed below the stall. */
+static int segment_error(acp_trip_result *o, int st, double limit, double excess) {
+  if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CRUISE, ACP_NAN);
+  if (st == ACP_ERR_RANGE && limit == ACP_LIMIT_MASS_OPERATING_EMPTY)
+    return infeasible(o, st, ACP_TRIP_NO_FUEL, excess);
+  if (st == ACP_ERR_RANGE && limit == ACP_LIMIT_CL_MAX)
+    return infeasible(o, st, ACP_TRIP_BELOW_STALL, excess);
+  return st;
+}
+
+/* Climb, cruise to the top of descent, descent (the take-off mass limit is
+   checked by the callers). */
 static int fly(const acp_aircraft *ac, const acp_mission *ms, double tow, acp_trip_result *o) {
   const double *v = ms->v;
   const double dist = v[MK_DISTANCE], hc = v[MK_CRUISE_ALTITUDE];
@@ -156,9 +168,9 @@ static int fly(const acp_aircraft *ac, const acp_mission *ms, double tow, acp_tr
   acp_profile cl, de;
   acp_cruise_result cr;
   memset(&cr, 0, sizeof cr); /* every field is set by the loop's first pass; zero meanwhile */
-  int st = acp_climb(ac, tow, ho, hc, dtemp, wind, v[MK_CLIMB_STEP], &cl);
+  int st = perf_profile(ac, 0, tow, ho, hc, dtemp, wind, v[MK_CLIMB_STEP], PERF_RELAX_MTOW, &cl);
   if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CLIMB, ACP_NAN);
-  if (st != ACP_OK) return st;
+  if (st != ACP_OK) return segment_error(o, st, cl.limit, cl.limit_excess);
   /* Top of descent: descend from the cruise's end mass and level; the cruise
      distance follows. Settled when the descent's distance changes by less
      than TOD_TOL metres at the same level: the last cruise stands. */
@@ -166,8 +178,9 @@ static int fly(const acp_aircraft *ac, const acp_mission *ms, double tow, acp_tr
   cr.hp_end = hc;
   int settled = 0;
   for (int k = 0; k < TOD_ITERATIONS; ++k) {
-    st = acp_descent(ac, m_tod, h_tod, hd, dtemp, wind, v[MK_CLIMB_STEP], &de);
-    if (st != ACP_OK) return st;
+    st = perf_profile(ac, 1, m_tod, h_tod, hd, dtemp, wind, v[MK_CLIMB_STEP], PERF_RELAX_MTOW,
+                      &de);
+    if (st != ACP_OK) return segment_error(o, st, de.limit, de.limit_excess);
     if (fabs(de.distance - d_desc) < TOD_TOL && h_tod == cr.hp_end) {
       settled = 1;
       break;
@@ -181,10 +194,10 @@ static int fly(const acp_aircraft *ac, const acp_mission *ms, double tow, acp_tr
       cr.hp_end = hc;
       cr.sar_mean = ACP_NAN;
     } else {
-      st = acp_cruise(ac, mode, v[MK_COST_INDEX], cl.mass_end, hc, dtemp, wind,
-                      ACP_CRUISE_END_DISTANCE, d_cruise, v[MK_CRUISE_STEP], v[MK_STEP_CLIMB], &cr);
-      if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CRUISE, ACP_NAN);
-      if (st != ACP_OK) return st;
+      st = perf_cruise(ac, mode, v[MK_COST_INDEX], cl.mass_end, hc, dtemp, wind,
+                       ACP_CRUISE_END_DISTANCE, d_cruise, v[MK_CRUISE_STEP], v[MK_STEP_CLIMB],
+                       PERF_RELAX_MTOW, &cr);
+      if (st != ACP_OK) return segment_error(o, st, cr.limit, cr.limit_excess);
     }
     m_tod = cr.mass_end;
     h_tod = cr.hp_end;
@@ -216,17 +229,20 @@ static int reserves(const acp_aircraft *ac, const acp_mission *ms, acp_trip_resu
   o->contingency_fuel = fmax(v[MK_CONTINGENCY_FRACTION] * o->trip_fuel, v[MK_CONTINGENCY_MINIMUM]);
   o->alternate_fuel = v[MK_ALTERNATE_FUEL];
   const double m_hold = o->landing_mass - o->contingency_fuel - o->alternate_fuel;
-  if (!(m_hold > ACP_POLAR_MASS_MIN))
-    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_NO_FUEL, ACP_POLAR_MASS_MIN - m_hold);
+  const double floor_ = perf_mass_floor(ac);
+  if (!(m_hold > floor_))
+    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_BELOW_OPERATING_EMPTY, floor_ - m_hold);
   double fr = 0.0;
   if (v[MK_FINAL_RESERVE_TIME] > 0.0) {
     acp_cruise_result h;
-    const int st = acp_cruise(ac, ACP_CRUISE_MAX_ENDURANCE, 0.0, m_hold,
-                              v[MK_DESTINATION_ALTITUDE] + v[MK_HOLDING_HEIGHT],
-                              v[MK_ISA_DEVIATION], 0.0, ACP_CRUISE_END_TIME,
-                              v[MK_FINAL_RESERVE_TIME], 0.0, 0.0, &h);
-    if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CRUISE, ACP_NAN);
-    if (st != ACP_OK) return st;
+    const int st = perf_cruise(ac, ACP_CRUISE_MAX_ENDURANCE, 0.0, m_hold,
+                               v[MK_DESTINATION_ALTITUDE] + v[MK_HOLDING_HEIGHT],
+                               v[MK_ISA_DEVIATION], 0.0, ACP_CRUISE_END_TIME,
+                               v[MK_FINAL_RESERVE_TIME], 0.0, 0.0, PERF_RELAX_MTOW, &h);
+    /* the reserve burnt to below the empty mass: the zero-fuel mass is below it */
+    if (st == ACP_ERR_RANGE && h.limit == ACP_LIMIT_MASS_OPERATING_EMPTY)
+      return infeasible(o, st, ACP_TRIP_BELOW_OPERATING_EMPTY, h.limit_excess);
+    if (st != ACP_OK) return segment_error(o, st, h.limit, h.limit_excess);
     fr = h.fuel;
   }
   o->final_reserve_fuel = fr;
@@ -259,8 +275,9 @@ static int trip_at(const acp_aircraft *ac, const acp_mission *ms, double tow, ac
 static int limits(const acp_aircraft *ac, acp_trip_result *o) {
   const double mtow = ac_value(ac, AK_MASS_MAX_TAKEOFF), mlw = ac_value(ac, AK_MASS_MAX_LANDING);
   const double mzfw = ac_value(ac, AK_MASS_MAX_ZERO_FUEL), cap = ac_value(ac, AK_FUEL_CAPACITY);
-  if (o->zero_fuel_mass <= 0.0)
-    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_NO_FUEL, -o->zero_fuel_mass);
+  const double oew = perf_mass_floor(ac);
+  if (o->zero_fuel_mass < oew)
+    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_BELOW_OPERATING_EMPTY, oew - o->zero_fuel_mass);
   if (o->takeoff_mass > mtow)
     return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_TAKEOFF, o->takeoff_mass - mtow);
   if (o->landing_mass > mlw)
@@ -288,9 +305,11 @@ int acp_trip(const acp_aircraft *ac, const acp_mission *mission, double takeoff_
              acp_trip_result *out) {
   int st = check(ac, mission, takeoff_mass, out);
   if (st != ACP_OK) return st;
-  const double mtow = ac_value(ac, AK_MASS_MAX_TAKEOFF);
+  const double mtow = ac_value(ac, AK_MASS_MAX_TAKEOFF), oew = perf_mass_floor(ac);
   if (takeoff_mass > mtow)
     return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_TAKEOFF, takeoff_mass - mtow);
+  if (takeoff_mass < oew)
+    return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_BELOW_OPERATING_EMPTY, oew - takeoff_mass);
   st = trip_at(ac, mission, takeoff_mass, out);
   if (st == ACP_OK) st = limits(ac, out);
   if (st != ACP_OK && isnan(out->infeasible)) result_nan(out);
@@ -301,9 +320,11 @@ int acp_trip_for_zero_fuel_mass(const acp_aircraft *ac, const acp_mission *missi
                                 double zero_fuel_mass, acp_trip_result *out) {
   int st = check(ac, mission, zero_fuel_mass, out);
   if (st != ACP_OK) return st;
-  const double mzfw = ac_value(ac, AK_MASS_MAX_ZERO_FUEL);
+  const double mzfw = ac_value(ac, AK_MASS_MAX_ZERO_FUEL), oew = perf_mass_floor(ac);
   if (zero_fuel_mass > mzfw)
     return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_ZERO_FUEL, zero_fuel_mass - mzfw);
+  if (zero_fuel_mass < oew)
+    return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_BELOW_OPERATING_EMPTY, oew - zero_fuel_mass);
   /* g(tow) = zero-fuel mass of the trip flown from tow, less the wanted one;
      g rises with tow at a slope a little below 1. Start from below (the
      take-off mass is at least the zero-fuel mass plus the alternate fuel). */

@@ -30,4 +30,17 @@ static inline acp_aircraft *aircraft_from_example(const char *name) {
   return ac;
 }
 
+/* A copy of an aircraft without its mass, altitude and speed limits, for
+   tests of the physics beyond the envelope (thrust, ceilings, stall). */
+static inline acp_aircraft *aircraft_without_limits(const acp_aircraft *src) {
+  static const char *const keys[] = {"mass_max_takeoff", "mass_max_landing", "mass_max_zero_fuel",
+                                     "mass_operating_empty", "fuel_capacity", "max_altitude"};
+  acp_aircraft *ac = acp_aircraft_new();
+  assert_non_null(ac);
+  assert_int_equal(acp_aircraft_copy(ac, src), ACP_OK);
+  for (size_t i = 0; i < sizeof keys / sizeof keys[0]; ++i)
+    assert_int_equal(acp_aircraft_unset(ac, keys[i]), ACP_OK);
+  return ac;
+}
+
 #endif /* ACPERF_TEST_FIXTURES_H */

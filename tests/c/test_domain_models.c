@@ -677,8 +677,10 @@ static void test_fuzz_regressions(void **state) {
   acp_aircraft_free(weak);
   /* ceilings: a buffet altitude above the 25,000 m search range is NaN (documented) */
   acp_ceiling_set cs;
-  assert_int_equal(acp_ceilings(g_jet, 1000, 0, &cs), ACP_OK);
+  acp_aircraft *light = aircraft_without_limits(g_jet); /* 1,000 kg: far below the empty mass */
+  assert_int_equal(acp_ceilings(light, 1000, 0, &cs), ACP_OK);
   CHECK_NAN(cs.buffet_altitude, "buffet altitude above the search range (was 35,330 m)");
+  acp_aircraft_free(light);
   /* cruise: an end so close that no fuel is burnt has no mean SAR: ACP_ERR_RANGE */
   acp_cruise_result cr;
   assert_int_equal(acp_cruise(g_jet, ACP_CRUISE_MAX_RANGE, 0, 30000, 9000, 0, 0, ACP_CRUISE_END_DISTANCE,

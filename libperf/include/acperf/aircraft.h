@@ -50,6 +50,25 @@ enum acp_component_type {
 
 ACP_BEGIN_DECLS
 
+/**
+ * Which of the aircraft's limits a flight function found exceeded (the
+ * `limit` field of acp_profile, acp_profile_point and acp_cruise_result).
+ * A limit is checked when its key is given; exceeding one is ACP_ERR_RANGE,
+ * with the code and the excess (kg, m or the lift coefficient) in the
+ * output. Which limits are errors and which are flags: docs/limits.md.
+ */
+enum acp_limit {
+  ACP_LIMIT_NONE = 0,                 /**< inside every limit that is given */
+  ACP_LIMIT_MASS_MAX_TAKEOFF = 1,     /**< a mass above mass_max_takeoff (excess kg) */
+  ACP_LIMIT_MASS_OPERATING_EMPTY = 2, /**< a mass below mass_operating_empty, or fuel burnt
+                                           to below it (excess kg); 1 kg when not given */
+  ACP_LIMIT_MAX_ALTITUDE = 3,         /**< a pressure altitude above max_altitude (excess m) */
+  ACP_LIMIT_CL_MAX = 4,               /**< 1 g lift coefficient above cl_max: below the stall
+                                           (excess: CL - cl_max) */
+  ACP_LIMIT_VMO = 5,                  /**< a CAS above vmo (excess m/s) */
+  ACP_LIMIT_MMO = 6                   /**< a Mach number above mmo (excess in Mach) */
+};
+
 /** Opaque aircraft model. */
 typedef struct acp_aircraft acp_aircraft;
 

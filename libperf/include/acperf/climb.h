@@ -46,6 +46,9 @@ typedef struct {
   double fuel_flow;           /**< kg/s */
   double acceleration_factor; /**< f of the schedule (0 marks a level speed change) */
   double mode;                /**< acp_schedule_mode of the schedule at this point */
+  double limit;               /**< point functions: an acp_limit (NONE on success; the limit
+                                   exceeded on ACP_ERR_RANGE from a limit, else NaN) */
+  double limit_excess;        /**< by how much (unit of the limit); 0 on success, else NaN */
 } acp_profile_point;
 
 /** Totals of a climb or descent. All doubles. Append-only. */
@@ -58,7 +61,24 @@ typedef struct {
   double speed_change_time;     /**< s of the level acceleration/deceleration at the limit altitude */
   double speed_change_distance; /**< m of it */
   double speed_change_fuel;     /**< kg of it */
+  double limit;        /**< an acp_limit: NONE on success; on ACP_ERR_RANGE from a limit, the
+                            limit exceeded (at the start or where the profile crossed it); else NaN */
+  double limit_excess; /**< by how much (kg, m, CL, m/s or Mach); 0 on success, else NaN */
 } acp_profile;
+
+/** The least margin to buffet onset in cruise, as a load factor (common practice: 1.3 g). */
+#define ACP_BUFFET_MARGIN 1.3
+
+/** What holds an altitude of acp_ceiling_set. */
+enum acp_altitude_limit {
+  ACP_ALTITUDE_LIMIT_NONE = 0,   /**< nothing: the SAR has an inner maximum there (or no limit
+                                      is given, for max_cruise_altitude: the 25,000 m search top) */
+  ACP_ALTITUDE_LIMIT_THRUST = 1, /**< the maximum-cruise thrust: level flight fails 1 m above */
+  ACP_ALTITUDE_LIMIT_CLIMB = 2,  /**< the residual climb rate (100 ft/min for optimum_altitude,
+                                      300 ft/min for the cruise altitudes) */
+  ACP_ALTITUDE_LIMIT_BUFFET = 3, /**< the ACP_BUFFET_MARGIN margin to buffet onset */
+  ACP_ALTITUDE_LIMIT_MAX_ALTITUDE = 4 /**< the aircraft's max_altitude */
+};
 
 /** Ceilings and optimum altitude at a mass. All doubles. Append-only. */
 typedef struct {
@@ -66,7 +86,13 @@ typedef struct {
   double max_climb_altitude;   /**< where it falls to 300 ft/min (common practice) */
   double buffet_altitude;      /**< highest altitude with a 1.3 g margin to buffet at cruise_mach */
   double max_cruise_altitude;  /**< lowest of max_climb_altitude, buffet_altitude, max_altitude */
-  double optimum_altitude;     /**< altitude of the greatest specific air range at cruise_mach */
+  double optimum_altitude;     /**< altitude of the greatest specific air range at cruise_mach
+                                    below the service ceiling where level flight holds (never
+                                    one where it fails); may lie above max_cruise_altitude */
+  double optimum_limit;        /**< an acp_altitude_limit: what holds optimum_altitude */
+  double best_cruise_altitude; /**< the same within max_cruise_altitude: the altitude to fly */
+  double best_cruise_limit;    /**< an acp_altitude_limit: what holds best_cruise_altitude */
+  double max_cruise_limit;     /**< an acp_altitude_limit: which limit gives max_cruise_altitude */
 } acp_ceiling_set;
 
 /**

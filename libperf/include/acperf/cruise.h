@@ -91,7 +91,13 @@ typedef struct {
   double tsfc;         /**< fuel flow per thrust, kg/(N s) */
   double lift_to_drag; /**< m g / drag */
   double sar;          /**< specific air range over the ground, m/kg */
-  double limit;        /**< an acp_cruise_limit value */
+  double limit;        /**< an acp_cruise_limit value: which bound holds the speed */
+  double buffet_margin; /**< load factor to buffet onset, cl_buffet/CL (cl_max/CL without
+                             cl_buffet; NaN with neither): a flag below ACP_BUFFET_MARGIN (1.3 g),
+                             not an error */
+  double limit_exceeded; /**< an acp_limit: NONE on success; on ACP_ERR_RANGE from an aircraft
+                              limit, which one (else NaN) */
+  double limit_excess;   /**< by how much (kg, m, CL, m/s or Mach); 0 on success, else NaN */
 } acp_cruise_point;
 
 /** Totals of a cruise. All doubles. Append-only. */
@@ -110,6 +116,10 @@ typedef struct {
   double step_climb_time;     /**< s spent in step climbs (included in time) */
   double step_climb_distance; /**< m covered in step climbs (included in distance) */
   double step_climb_fuel;     /**< kg burnt in step climbs (included in fuel) */
+  double limit;        /**< an acp_limit: NONE on success; on ACP_ERR_RANGE from an aircraft
+                            limit (at the start or where the cruise crossed it), which one; else NaN */
+  double limit_excess; /**< by how much (kg, m, CL, m/s or Mach); 0 on success, else NaN */
+  double buffet_margin_min; /**< least buffet_margin of the points flown (NaN when unknown) */
 } acp_cruise_result;
 
 /**

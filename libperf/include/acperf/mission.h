@@ -79,7 +79,11 @@ enum acp_trip_infeasible {
   ACP_TRIP_CANNOT_CLIMB = 7,       /**< the cruise altitude cannot be reached (ACP_ERR_THRUST) */
   ACP_TRIP_CANNOT_CRUISE = 8,      /**< level flight cannot be held in cruise or holding (ACP_ERR_THRUST) */
   ACP_TRIP_CRUISE_TOO_LOW = 9,     /**< cruise altitude not above the origin and destination (ACP_ERR_RANGE) */
-  ACP_TRIP_NO_FUEL = 10            /**< the fuel needed exceeds the mass available (ACP_ERR_RANGE) */
+  ACP_TRIP_NO_FUEL = 10,           /**< the fuel needed exceeds the mass available (ACP_ERR_RANGE) */
+  ACP_TRIP_BELOW_OPERATING_EMPTY = 11, /**< a take-off or zero-fuel mass below
+                                            mass_operating_empty (ACP_ERR_RANGE; excess kg) */
+  ACP_TRIP_BELOW_STALL = 12        /**< the cruise or holding speed is below the 1 g stall:
+                                        lift coefficient above cl_max (ACP_ERR_RANGE; excess CL) */
 };
 
 /** A trip and its fuel. All doubles. Append-only. Masses kg, times s, distances m. */
