@@ -238,10 +238,8 @@ static int reserves(const acp_aircraft *ac, const acp_mission *ms, acp_trip_resu
     const int st = perf_cruise(ac, ACP_CRUISE_MAX_ENDURANCE, 0.0, m_hold,
                                v[MK_DESTINATION_ALTITUDE] + v[MK_HOLDING_HEIGHT],
                                v[MK_ISA_DEVIATION], 0.0, ACP_CRUISE_END_TIME,
-                               v[MK_FINAL_RESERVE_TIME], 0.0, 0.0, PERF_RELAX_MTOW, &h);
-    /* the reserve burnt to below the empty mass: the zero-fuel mass is below it */
-    if (st == ACP_ERR_RANGE && h.limit == ACP_LIMIT_MASS_OPERATING_EMPTY)
-      return infeasible(o, st, ACP_TRIP_BELOW_OPERATING_EMPTY, h.limit_excess);
+                               v[MK_FINAL_RESERVE_TIME], 0.0, 0.0,
+                               PERF_RELAX_MTOW | PERF_RELAX_FLOOR, &h);
     if (st != ACP_OK) return segment_error(o, st, h.limit, h.limit_excess);
     fr = h.fuel;
   }
@@ -271,18 +269,20 @@ static int trip_at(const acp_aircraft *ac, const acp_mission *ms, double tow, ac
   return st;
 }
 
-/* Limits of the aircraft on a computed trip (keys that are given). */
-static int limits(const acp_aircraft *ac, acp_trip_result *o) {
+/* Limits of the aircraft on a computed trip (keys that are given). The
+   zero-fuel mass is compared with zfm_slack: acp_trip_for_zero_fuel_mass()
+   checked the mass asked for exactly and matches it to ZFM_TOL. */
+static int limits(const acp_aircraft *ac, acp_trip_result *o, double zfm_slack) {
   const double mtow = ac_value(ac, AK_MASS_MAX_TAKEOFF), mlw = ac_value(ac, AK_MASS_MAX_LANDING);
   const double mzfw = ac_value(ac, AK_MASS_MAX_ZERO_FUEL), cap = ac_value(ac, AK_FUEL_CAPACITY);
   const double oew = perf_mass_floor(ac);
-  if (o->zero_fuel_mass < oew)
+  if (o->zero_fuel_mass < oew - zfm_slack)
     return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_BELOW_OPERATING_EMPTY, oew - o->zero_fuel_mass);
   if (o->takeoff_mass > mtow)
     return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_TAKEOFF, o->takeoff_mass - mtow);
   if (o->landing_mass > mlw)
     return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_LANDING, o->landing_mass - mlw);
-  if (o->zero_fuel_mass > mzfw)
+  if (o->zero_fuel_mass > mzfw + zfm_slack)
     return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_ZERO_FUEL, o->zero_fuel_mass - mzfw);
   if (o->block_fuel > cap)
     return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_OVER_FUEL_CAPACITY, o->block_fuel - cap);
@@ -311,7 +311,7 @@ int acp_trip(const acp_aircraft *ac, const acp_mission *mission, double takeoff_
   if (takeoff_mass < oew)
     return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_BELOW_OPERATING_EMPTY, oew - takeoff_mass);
   st = trip_at(ac, mission, takeoff_mass, out);
-  if (st == ACP_OK) st = limits(ac, out);
+  if (st == ACP_OK) st = limits(ac, out, 0.0);
   if (st != ACP_OK && isnan(out->infeasible)) result_nan(out);
   return st;
 }
@@ -332,6 +332,14 @@ int acp_trip_for_zero_fuel_mass(const acp_aircraft *ac, const acp_mission *missi
          g_prev = ACP_NAN;
   for (int k = 1; k <= ZFM_ITERATIONS; ++k) {
     st = trip_at(ac, mission, tow, out);
+    const int light = out->infeasible == ACP_TRIP_NO_FUEL ||
+                      out->infeasible == ACP_TRIP_BELOW_OPERATING_EMPTY;
+    if (st == ACP_ERR_RANGE && light && isnan(g_prev)) {
+      /* the start (zero-fuel mass + alternate) burns to below the empty mass
+         before it settles: start heavier by the missing mass and 5 % */
+      tow += out->excess + 0.05 * zero_fuel_mass;
+      continue;
+    }
     if (st != ACP_OK) {
       if (isnan(out->infeasible)) result_nan(out);
       return st;
@@ -339,7 +347,7 @@ int acp_trip_for_zero_fuel_mass(const acp_aircraft *ac, const acp_mission *missi
     const double g = out->zero_fuel_mass - zero_fuel_mass;
     if (fabs(g) < ZFM_TOL) {
       out->iterations = k;
-      st = limits(ac, out);
+      st = limits(ac, out, ZFM_TOL);
       if (st != ACP_OK && isnan(out->infeasible)) result_nan(out);
       return st;
     }

@@ -54,7 +54,8 @@ int perf_envelope(const acp_aircraft *ac, double mass, double hp, unsigned relax
                   perf_limit *lim) {
   lim->code = ACP_LIMIT_NONE;
   lim->excess = 0.0;
-  const double mtow = ac_value(ac, AK_MASS_MAX_TAKEOFF), floor_ = perf_mass_floor(ac);
+  const double mtow = ac_value(ac, AK_MASS_MAX_TAKEOFF);
+  const double floor_ = relax & PERF_RELAX_FLOOR ? ACP_POLAR_MASS_MIN : perf_mass_floor(ac);
   const double top = ac_value(ac, AK_MAX_ALTITUDE);
   if (mass > mtow && !(relax & PERF_RELAX_MTOW)) return exceeded(lim, ACP_LIMIT_MASS_MAX_TAKEOFF, mass - mtow);
   if (mass < floor_) return exceeded(lim, ACP_LIMIT_MASS_OPERATING_EMPTY, floor_ - mass);

@@ -35,6 +35,9 @@ double perf_mass_floor(const acp_aircraft *ac);
 /* What the trip relaxes while it iterates on the take-off mass (it reports a
    take-off mass above the limit itself, with the excess). */
 #define PERF_RELAX_MTOW 1u
+/* ... and the empty-mass floor of the final-reserve holding (the trip checks
+   the zero-fuel mass it ends at itself). */
+#define PERF_RELAX_FLOOR 2u
 
 /* The aircraft's limits on a mass and a pressure altitude (keys that are given;
    hp NaN skips the altitude): ACP_OK with lim NONE, or ACP_ERR_RANGE with lim set. */
