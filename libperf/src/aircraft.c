@@ -69,6 +69,7 @@ const ac_keydef AC_KEYS[AK_COUNT] = {
     [AK_DESCENT_CAS] = {"descent_cas", "m/s", 20.0, 300.0, ACP_NAN, 0},
     [AK_DESCENT_MACH] = {"descent_mach", "", 0.05, 0.95, ACP_NAN, 0},
     [AK_CRUISE_MACH] = {"cruise_mach", "", 0.05, 0.95, ACP_NAN, 0},
+    [AK_APPROACH_CAS] = {"approach_cas", "m/s", 20.0, 150.0, ACP_NAN, 0},
 };
 
 /* Component fields; flags: the types that use the field | KF_*. */

@@ -58,6 +58,7 @@ enum ac_key {
   AK_DESCENT_CAS,
   AK_DESCENT_MACH,
   AK_CRUISE_MACH,
+  AK_APPROACH_CAS,
   AK_COUNT
 };
 

@@ -11,7 +11,6 @@
 #include "performance_internal.h"
 #include "propulsion_internal.h"
 
-#define SPEED_CHANGE_STEPS 12   /* TAS steps of the level speed change */
 #define RATE_MIN 0.0508         /* 10 ft/min: below it a climb or descent "stops" */
 #define SEARCH_TOP 25000.0      /* highest altitude searched for ceilings, m */
 #define ATM_TROPOPAUSE 11000.0  /* where the lapse rate (and f) jumps, m */
@@ -180,10 +179,20 @@ static int altitude_segment(const phase *ph, run *r, double h1, size_t n) {
   return ACP_OK;
 }
 
+/* The specific excess power (T - D) V/W of a level-flight point is at least
+   RATE_MIN, accelerating when climbing and decelerating when descending. */
+static int enough_power(const phase *ph, const acp_profile_point *p) {
+  const double ps = (p->thrust - p->drag) * p->tas / (p->mass * ACP_G0);
+  return ph->descent ? ps < -RATE_MIN : ps > RATE_MIN;
+}
+
 /* Level acceleration (climb) or deceleration (descent) at the current altitude
-   to TAS v1, in SPEED_CHANGE_STEPS steps of TAS: the trapezoidal rule on
+   to TAS v1, in ACP_SPEED_CHANGE_STEPS steps of TAS: Simpson's rule on
    dt/dV = m/(T - D), dx/dV = (ground speed) dt/dV and dm/dV = (fuel flow)
-   dt/dV, the end mass of each step predicted by an Euler step. */
+   dt/dV, the masses at the middle and the end of each step predicted as in
+   altitude_segment(). Climbing must accelerate and descending decelerate with
+   a specific excess power of at least RATE_MIN at every point (else the
+   change takes unbounded time, as a climb below RATE_MIN would). */
 static int speed_segment(const phase *ph, run *r, double v1, double mode) {
   const double v0 = r->cur.tas, t0 = r->cur.time, x0 = r->cur.distance, m0 = r->cur.mass;
   acp_profile_point p0;
@@ -193,26 +202,26 @@ static int speed_segment(const phase *ph, run *r, double v1, double mode) {
   p0.distance = x0;
   p0.mode = r->cur.mode;
   r->cur = p0;
-  for (int i = 1; i <= SPEED_CHANGE_STEPS; ++i) {
+  for (int i = 1; i <= ACP_SPEED_CHANGE_STEPS; ++i) {
     const acp_profile_point *a = &r->cur;
-    const double v = v0 + (v1 - v0) * i / SPEED_CHANGE_STEPS;
-    const double dv = v - a->tas;
+    const double dv = v0 + (v1 - v0) * i / ACP_SPEED_CHANGE_STEPS - a->tas;
     const double acc0 = (a->thrust - a->drag) / a->mass;
-    acp_profile_point p1;
-    st = forces(ph, a->mass - a->fuel_flow * dv / acc0, a->hp, v, 0.0, &p1);
+    acp_profile_point pm, p1;
+    if (!enough_power(ph, a)) return ACP_ERR_THRUST;
+    st = forces(ph, a->mass - 0.5 * dv * a->fuel_flow / acc0, a->hp, a->tas + 0.5 * dv, 0.0, &pm);
     if (st != ACP_OK) return st;
+    if (!enough_power(ph, &pm)) return ACP_ERR_THRUST;
+    const double accm = (pm.thrust - pm.drag) / pm.mass;
+    st = forces(ph, a->mass - dv * pm.fuel_flow / accm, a->hp, a->tas + dv, 0.0, &p1);
+    if (st != ACP_OK) return st;
+    if (!enough_power(ph, &p1)) return ACP_ERR_THRUST;
     const double acc1 = (p1.thrust - p1.drag) / p1.mass;
-    /* climbing must accelerate, descending decelerate, with at least the
-       specific excess power (T - D) V/W of RATE_MIN (else the speed change
-       takes unbounded time, as a climb below RATE_MIN would) */
-    const double ps0 = acc0 * a->tas / ACP_G0, ps1 = acc1 * v / ACP_G0;
-    if (ph->descent ? !(ps0 < -RATE_MIN && ps1 < -RATE_MIN) : !(ps0 > RATE_MIN && ps1 > RATE_MIN))
-      return ACP_ERR_THRUST;
     p1.mode = mode;
-    const double w = 0.5 * dv;
-    const double dt = w * (1.0 / acc0 + 1.0 / acc1);
-    const double dx = w * (ground_speed(ph, a) / acc0 + ground_speed(ph, &p1) / acc1);
-    const double dm = w * (a->fuel_flow / acc0 + p1.fuel_flow / acc1);
+    const double w = dv / 6.0;
+    const double dt = w * (1.0 / acc0 + 4.0 / accm + 1.0 / acc1);
+    const double dx = w * (ground_speed(ph, a) / acc0 + 4.0 * ground_speed(ph, &pm) / accm +
+                           ground_speed(ph, &p1) / acc1);
+    const double dm = w * (a->fuel_flow / acc0 + 4.0 * pm.fuel_flow / accm + p1.fuel_flow / acc1);
     st = book(ph, r, &p1, dt, dx, dm);
     if (st != ACP_OK) return st;
   }
@@ -277,7 +286,7 @@ static plan make_plan(const phase *ph, double h0, double h1, double step) {
 }
 
 static size_t plan_points(const plan *p) {
-  size_t n = 1 + (p->change_after < PLAN_MAX || p->change_first ? SPEED_CHANGE_STEPS : 0);
+  size_t n = 1 + (p->change_after < PLAN_MAX || p->change_first ? ACP_SPEED_CHANGE_STEPS : 0);
   for (size_t k = 0; k < p->nseg; ++k) n += p->steps[k];
   return n;
 }
@@ -370,6 +379,44 @@ int perf_profile(const acp_aircraft *ac, int descent, double mass, double hp_sta
                  double dtemp, double wind, double step, unsigned relax, acp_profile *out) {
   return profile(ac, descent, mass, hp_start, hp_end, dtemp, wind, step, relax, 0, NULL, NULL,
                  out);
+}
+
+/* A level speed change at hp from v0 to v1: accelerating at the climb
+   rating, decelerating at flight idle (the profile's phase). */
+static int speed_change(const acp_aircraft *ac, double mass, double hp, double dtemp, double wind,
+                        double v0, double v1, unsigned relax, acp_profile *out) {
+  if (!out) return ACP_ERR_INVALID;
+  set_nan_profile(out);
+  perf_limit lim;
+  double step = ACP_CLIMB_STEP_DEFAULT;
+  int st = check_args(ac, mass, hp, hp, dtemp, wind, &step, relax, &lim);
+  if (st == ACP_OK && !(isfinite(v0) && isfinite(v1))) st = ACP_ERR_INVALID;
+  if (st == ACP_OK && !(v0 > 0.0 && v1 > 0.0)) st = ACP_ERR_RANGE;
+  run r = {.cur = {.hp = hp, .mass = mass, .tas = v0, .time = 0.0, .distance = 0.0,
+                   .mode = ACP_NAN}};
+  if (st == ACP_OK && v1 != v0) {
+    const phase ph = {ac, v1 < v0, dtemp, wind, perf_mass_floor(ac), &lim};
+    st = speed_segment(&ph, &r, v1, ACP_NAN);
+  }
+  if (st == ACP_OK) {
+    out->time = out->speed_change_time = r.cur.time;
+    out->distance = out->speed_change_distance = r.cur.distance;
+    out->fuel = out->speed_change_fuel = mass - r.cur.mass;
+    out->mass_end = r.cur.mass;
+    out->tas_end = v1;
+  }
+  perf_limit_report(st, &lim, &out->limit, &out->limit_excess);
+  return st;
+}
+
+int perf_speed_change(const acp_aircraft *ac, double mass, double hp, double dtemp, double wind,
+                      double tas_start, double tas_end, unsigned relax, acp_profile *out) {
+  return speed_change(ac, mass, hp, dtemp, wind, tas_start, tas_end, relax, out);
+}
+
+int acp_level_speed_change(const acp_aircraft *ac, double mass, double hp, double dtemp,
+                           double wind, double tas_start, double tas_end, acp_profile *out) {
+  return speed_change(ac, mass, hp, dtemp, wind, tas_start, tas_end, 0u, out);
 }
 
 int acp_climb(const acp_aircraft *ac, double mass, double hp_start, double hp_end, double dtemp,

@@ -4,11 +4,13 @@
 #include <stdlib.h>
 #include <string.h>
 
+#include "acperf/airspeed.h"
 #include "acperf/climb.h"
 #include "acperf/cruise.h"
 #include "acperf/propulsion.h"
 #include "acperf/status.h"
 #include "aircraft_internal.h"
+#include "cruise_internal.h"
 #include "internal.h"
 #include "performance_internal.h"
 
@@ -37,6 +39,7 @@ enum mkey {
   MK_ALTERNATE_FUEL,
   MK_FINAL_RESERVE_TIME,
   MK_HOLDING_HEIGHT,
+  MK_DESCENT_END_HEIGHT,
   MK_COUNT
 };
 
@@ -71,6 +74,7 @@ static const mkeydef MKEYS[MK_COUNT] = {
     [MK_FINAL_RESERVE_TIME] = {"final_reserve_time", 0.0, 14400.0, ACP_FINAL_RESERVE_TIME_TYPICAL,
                                0},
     [MK_HOLDING_HEIGHT] = {"holding_height", 0.0, 10000.0, ACP_HOLDING_HEIGHT_TYPICAL, 0},
+    [MK_DESCENT_END_HEIGHT] = {"descent_end_height", 0.0, 3000.0, 0.0, 0},
 };
 
 struct acp_mission {
@@ -153,73 +157,168 @@ static int segment_error(acp_trip_result *o, int st, double limit, double excess
   return st;
 }
 
-/* Climb, cruise to the top of descent, descent (the take-off mass limit is
-   checked by the callers). */
+/* A level speed change of no length: the speed is already right. */
+static void no_change(acp_profile *p, double mass, double tas) {
+  p->time = p->distance = p->fuel = 0.0;
+  p->speed_change_time = p->speed_change_distance = p->speed_change_fuel = 0.0;
+  p->mass_end = mass;
+  p->tas_end = tas;
+  p->limit = ACP_LIMIT_NONE;
+  p->limit_excess = 0.0;
+}
+
+/* A level speed change from v0 to v1 at hp, or none when relevant is false. */
+static int change(const acp_aircraft *ac, const acp_mission *ms, double mass, double hp, double v0,
+                  double v1, int relevant, acp_profile *p) {
+  if (!relevant || v1 == v0) {
+    no_change(p, mass, v0);
+    return ACP_OK;
+  }
+  return perf_speed_change(ac, mass, hp, ms->v[MK_ISA_DEVIATION], ms->v[MK_WIND], v0, v1,
+                           PERF_RELAX_MTOW, p);
+}
+
+/* The segments of a trip (docs/methods/trip.md). */
+typedef struct {
+  acp_profile climb, accelerate, decelerate, descent, approach;
+  acp_cruise_result cruise;
+} legs;
+
+/* From the end of the cruise (mass, level, speed) down: the deceleration to
+   the descent speed (when the descent is slower; a faster descent starts at
+   its speed), the descent to the destination plus descent_end_height, and the
+   deceleration to approach_cas there (when the aircraft has one). */
+static int descend(const acp_aircraft *ac, const acp_mission *ms, double mass, double h_tod,
+                   double v_cruise, acp_trip_result *o, legs *l) {
+  const double *v = ms->v;
+  const double dtemp = v[MK_ISA_DEVIATION], wind = v[MK_WIND];
+  const double h_end = v[MK_DESTINATION_ALTITUDE] + v[MK_DESCENT_END_HEIGHT];
+  acp_profile_point top;
+  int st = acp_descent_point(ac, mass, h_tod, dtemp, wind, &top);
+  if (st == ACP_ERR_RANGE && top.limit == ACP_LIMIT_MASS_MAX_TAKEOFF) { /* relaxed in the trip */
+    no_change(&l->decelerate, mass, v_cruise);
+    st = ACP_OK;
+  } else if (st == ACP_OK) {
+    st = change(ac, ms, mass, h_tod, v_cruise, top.tas, top.tas < v_cruise, &l->decelerate);
+  }
+  if (st != ACP_OK) return segment_error(o, st, l->decelerate.limit, l->decelerate.limit_excess);
+  st = perf_profile(ac, 1, l->decelerate.mass_end, h_tod, h_end, dtemp, wind, v[MK_CLIMB_STEP],
+                    PERF_RELAX_MTOW, &l->descent);
+  if (st != ACP_OK) return segment_error(o, st, l->descent.limit, l->descent.limit_excess);
+  const double vapp = ac_value(ac, AK_APPROACH_CAS);
+  const double tas_app = isnan(vapp) ? ACP_NAN : acp_cas_to_tas(vapp, h_end, dtemp);
+  st = change(ac, ms, l->descent.mass_end, h_end, l->descent.tas_end, tas_app,
+              tas_app < l->descent.tas_end, &l->approach);
+  if (st != ACP_OK) return segment_error(o, st, l->approach.limit, l->approach.limit_excess);
+  return ACP_OK;
+}
+
+static double down_distance(const legs *l) {
+  return l->decelerate.distance + l->descent.distance + l->approach.distance;
+}
+
+/* The climb, the acceleration to the cruise speed at the cruise level (at the
+   climb rating; a slower cruise speed is reached at idle). */
+static int climb_up(const acp_aircraft *ac, const acp_mission *ms, double tow, acp_trip_result *o,
+                    legs *l) {
+  const double *v = ms->v;
+  const double hc = v[MK_CRUISE_ALTITUDE], dtemp = v[MK_ISA_DEVIATION], wind = v[MK_WIND];
+  int st = perf_profile(ac, 0, tow, v[MK_ORIGIN_ALTITUDE], hc, dtemp, wind, v[MK_CLIMB_STEP],
+                        PERF_RELAX_MTOW, &l->climb);
+  if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CLIMB, ACP_NAN);
+  if (st != ACP_OK) return segment_error(o, st, l->climb.limit, l->climb.limit_excess);
+  cruise_cond c;
+  acp_cruise_point p;
+  st = cruise_cond_at(&c, ac, hc, dtemp, wind);
+  if (st == ACP_OK)
+    st = cruise_speed_at(&c, (int)v[MK_CRUISE_MODE], v[MK_COST_INDEX], l->climb.mass_end, NULL, &p);
+  if (st != ACP_OK) return segment_error(o, st, p.limit_exceeded, p.limit_excess);
+  st = change(ac, ms, l->climb.mass_end, hc, l->climb.tas_end, p.tas, 1, &l->accelerate);
+  if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CLIMB, ACP_NAN);
+  if (st != ACP_OK) return segment_error(o, st, l->accelerate.limit, l->accelerate.limit_excess);
+  return ACP_OK;
+}
+
+/* Climb, accelerate, cruise to the top of descent, decelerate, descend,
+   decelerate to the approach speed (the take-off mass limit is checked by
+   the callers). */
 static int fly(const acp_aircraft *ac, const acp_mission *ms, double tow, acp_trip_result *o) {
   const double *v = ms->v;
   const double dist = v[MK_DISTANCE], hc = v[MK_CRUISE_ALTITUDE];
   const double ho = v[MK_ORIGIN_ALTITUDE], hd = v[MK_DESTINATION_ALTITUDE];
   const double dtemp = v[MK_ISA_DEVIATION], wind = v[MK_WIND];
   const int mode = (int)v[MK_CRUISE_MODE];
-  if (hc <= fmax(ho, hd))
-    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_CRUISE_TOO_LOW, fmax(ho, hd) - hc);
+  const double h_low = fmax(ho, hd + v[MK_DESCENT_END_HEIGHT]);
+  if (hc <= h_low) return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_CRUISE_TOO_LOW, h_low - hc);
   const double top = ac_value(ac, AK_MAX_ALTITUDE);
   if (hc > top) return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_ABOVE_MAX_ALTITUDE, hc - top);
-  acp_profile cl, de;
-  acp_cruise_result cr;
-  memset(&cr, 0, sizeof cr); /* every field is set by the loop's first pass; zero meanwhile */
-  int st = perf_profile(ac, 0, tow, ho, hc, dtemp, wind, v[MK_CLIMB_STEP], PERF_RELAX_MTOW, &cl);
-  if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CLIMB, ACP_NAN);
-  if (st != ACP_OK) return segment_error(o, st, cl.limit, cl.limit_excess);
-  /* Top of descent: descend from the cruise's end mass and level; the cruise
-     distance follows. Settled when the descent's distance changes by less
-     than TOD_TOL metres at the same level: the last cruise stands. */
-  double m_tod = cl.mass_end, h_tod = hc, d_desc = ACP_NAN;
-  cr.hp_end = hc;
+  legs l;
+  memset(&l, 0, sizeof l); /* every field is set by the loop's first pass; zero meanwhile */
+  int st = climb_up(ac, ms, tow, o, &l);
+  if (st != ACP_OK) return st;
+  acp_cruise_result *cr = &l.cruise;
+  /* Top of descent: descend from the cruise's end mass, level and speed; the
+     cruise distance follows. Settled when the distance from the top of
+     descent changes by less than TOD_TOL metres at the same level: the last
+     cruise stands. */
+  const double m_cruise = l.accelerate.mass_end, v_cruise = l.accelerate.tas_end;
+  double m_tod = m_cruise, h_tod = hc, v_tod = v_cruise, d_down = ACP_NAN;
+  cr->hp_end = hc;
   int settled = 0;
   for (int k = 0; k < TOD_ITERATIONS; ++k) {
-    st = perf_profile(ac, 1, m_tod, h_tod, hd, dtemp, wind, v[MK_CLIMB_STEP], PERF_RELAX_MTOW,
-                      &de);
-    if (st != ACP_OK) return segment_error(o, st, de.limit, de.limit_excess);
-    if (fabs(de.distance - d_desc) < TOD_TOL && h_tod == cr.hp_end) {
+    st = descend(ac, ms, m_tod, h_tod, v_tod, o, &l);
+    if (st != ACP_OK) return st;
+    if (fabs(down_distance(&l) - d_down) < TOD_TOL && h_tod == cr->hp_end) {
       settled = 1;
       break;
     }
-    d_desc = de.distance;
-    const double d_cruise = dist - cl.distance - de.distance;
+    d_down = down_distance(&l);
+    const double d_cruise = dist - l.climb.distance - l.accelerate.distance - d_down;
     if (d_cruise < 0.0) return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_TOO_SHORT, -d_cruise);
     if (d_cruise < 1.0) { /* no cruise to speak of */
-      cr.time = cr.distance = cr.fuel = 0.0;
-      cr.mass_end = cl.mass_end;
-      cr.hp_end = hc;
-      cr.sar_mean = ACP_NAN;
+      cr->time = cr->distance = cr->fuel = 0.0;
+      cr->mass_end = m_cruise;
+      cr->hp_end = hc;
+      cr->tas_end = v_cruise;
+      cr->sar_mean = ACP_NAN;
     } else {
-      st = perf_cruise(ac, mode, v[MK_COST_INDEX], cl.mass_end, hc, dtemp, wind,
+      st = perf_cruise(ac, mode, v[MK_COST_INDEX], m_cruise, hc, dtemp, wind,
                        ACP_CRUISE_END_DISTANCE, d_cruise, v[MK_CRUISE_STEP], v[MK_STEP_CLIMB],
-                       PERF_RELAX_MTOW, &cr);
-      if (st != ACP_OK) return segment_error(o, st, cr.limit, cr.limit_excess);
+                       PERF_RELAX_MTOW, cr);
+      if (st != ACP_OK) return segment_error(o, st, cr->limit, cr->limit_excess);
     }
-    m_tod = cr.mass_end;
-    h_tod = cr.hp_end;
+    m_tod = cr->mass_end;
+    h_tod = cr->hp_end;
+    v_tod = cr->tas_end;
   }
   if (!settled) return ACP_ERR_NO_CONVERGENCE;
   o->takeoff_mass = tow;
-  o->landing_mass = de.mass_end;
-  o->trip_fuel = tow - de.mass_end;
-  o->trip_time = cl.time + cr.time + de.time;
-  o->climb_time = cl.time;
-  o->climb_distance = cl.distance;
-  o->climb_fuel = cl.fuel;
-  o->cruise_time = cr.time;
-  o->cruise_distance = cr.distance;
-  o->cruise_fuel = cr.fuel;
-  o->descent_time = de.time;
-  o->descent_distance = de.distance;
-  o->descent_fuel = de.fuel;
-  o->top_of_climb_mass = cl.mass_end;
+  o->landing_mass = l.approach.mass_end;
+  o->trip_fuel = tow - l.approach.mass_end;
+  o->trip_time = l.climb.time + l.accelerate.time + cr->time + l.decelerate.time +
+                 l.descent.time + l.approach.time;
+  o->climb_time = l.climb.time;
+  o->climb_distance = l.climb.distance;
+  o->climb_fuel = l.climb.fuel;
+  o->cruise_time = cr->time;
+  o->cruise_distance = cr->distance;
+  o->cruise_fuel = cr->fuel;
+  o->descent_time = l.descent.time;
+  o->descent_distance = l.descent.distance;
+  o->descent_fuel = l.descent.fuel;
+  o->top_of_climb_mass = l.climb.mass_end;
   o->top_of_descent_mass = m_tod;
   o->cruise_altitude_end = h_tod;
-  o->cruise_sar_mean = cr.sar_mean;
+  o->cruise_sar_mean = cr->sar_mean;
+  o->climb_acceleration_time = l.accelerate.time;
+  o->climb_acceleration_distance = l.accelerate.distance;
+  o->climb_acceleration_fuel = l.accelerate.fuel;
+  o->descent_deceleration_time = l.decelerate.time;
+  o->descent_deceleration_distance = l.decelerate.distance;
+  o->descent_deceleration_fuel = l.decelerate.fuel;
+  o->approach_deceleration_time = l.approach.time;
+  o->approach_deceleration_distance = l.approach.distance;
+  o->approach_deceleration_fuel = l.approach.fuel;
   return ACP_OK;
 }
 

@@ -44,10 +44,12 @@ double perf_mass_floor(const acp_aircraft *ac);
 int perf_envelope(const acp_aircraft *ac, double mass, double hp, unsigned relax,
                   perf_limit *lim);
 
-/* acp_climb() (descent 0) and acp_descent() (descent 1), and acp_cruise(),
+/* acp_climb() (descent 0) and acp_descent() (descent 1), acp_level_speed_change() and acp_cruise(),
    with the limits in relax not enforced (for the trip). */
 int perf_profile(const acp_aircraft *ac, int descent, double mass, double hp_start, double hp_end,
                  double dtemp, double wind, double step, unsigned relax, acp_profile *out);
+int perf_speed_change(const acp_aircraft *ac, double mass, double hp, double dtemp, double wind,
+                      double tas_start, double tas_end, unsigned relax, acp_profile *out);
 int perf_cruise(const acp_aircraft *ac, int mode, double cost_index, double mass, double hp,
                 double dtemp, double wind, int end, double end_value, double step,
                 double step_climb, unsigned relax, acp_cruise_result *out);

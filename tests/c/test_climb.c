@@ -255,6 +255,66 @@ static void test_table(void **state) {
   assert_int_equal(acp_climb_table(ac, 0.0, 0.0, 0.0, 1, NULL, 1, hp, 1, dt, t, x, f), 1);
 }
 
+/* A level speed change against the test's own integration of dV/dt =
+   (T - D)/m, dm/dt = -fuel flow, dx/dt = V + wind (the energy equation at
+   constant altitude), in 4,000 midpoint steps of TAS from the public point
+   models (acp_drag, acp_engine_rating): accelerating at the climb rating and
+   decelerating at flight idle. 1e-4 relative: the library's 12 trapezoidal
+   steps err by well under that on these gentle integrands. */
+static void integrate_speed_change(const acp_aircraft *ac, double mass, double hp, double wind,
+                                   double v0, double v1, int rating, double *t, double *x,
+                                   double *fuel) {
+  const int n = 4000;
+  double m = mass;
+  *t = *x = 0.0;
+  for (int k = 0; k < n; ++k) {
+    const double dv = (v1 - v0) / n, v = v0 + (k + 0.5) * dv;
+    acp_drag_parts d;
+    acp_engine_point e;
+    assert_int_equal(acp_drag(ac, m, hp, 0.0, v, &d), ACP_OK);
+    assert_int_equal(acp_engine_rating(ac, rating, hp, 0.0, v, &e), ACP_OK);
+    const double dt = dv * m / (e.thrust - d.total);
+    *t += dt;
+    *x += (v + wind) * dt;
+    m -= e.fuel_flow * dt;
+  }
+  *fuel = mass - m;
+}
+
+static void test_level_speed_change(void **state) {
+  const acp_aircraft *ac = *state;
+  const struct { double mass, hp, wind, v0, v1; int rating; } cases[] = {
+      {38000.0, 10000 * FT, 0.0, 130.0, 165.0, ACP_RATING_CLIMB}, /* at the speed limit */
+      {36000.0, 35000 * FT, 10.0, 224.0, 230.0, ACP_RATING_CLIMB}, /* top of climb */
+      {33000.0, 35000 * FT, -20.0, 230.0, 215.0, ACP_RATING_IDLE}, /* top of descent */
+      {33000.0, 1500 * FT, 0.0, 150.0, 75.0, ACP_RATING_IDLE},     /* to an approach speed */
+  };
+  for (size_t i = 0; i < sizeof cases / sizeof cases[0]; ++i) {
+    acp_profile p;
+    assert_int_equal(acp_level_speed_change(ac, cases[i].mass, cases[i].hp, 0.0, cases[i].wind,
+                                            cases[i].v0, cases[i].v1, &p), ACP_OK);
+    double t, x, fuel;
+    integrate_speed_change(ac, cases[i].mass, cases[i].hp, cases[i].wind, cases[i].v0, cases[i].v1,
+                           cases[i].rating, &t, &x, &fuel);
+    CHECK_CLOSE(p.time, t, 0.0, 1e-4, "speed change time");
+    CHECK_CLOSE(p.distance, x, 0.0, 1e-4, "speed change distance");
+    CHECK_CLOSE(p.fuel, fuel, 0.0, 1e-4, "speed change fuel");
+    CHECK_CLOSE(p.mass_end, cases[i].mass - p.fuel, 0.0, 1e-12, "mass booked");
+    CHECK_CLOSE(p.tas_end, cases[i].v1, 0.0, 0.0, "end speed");
+  }
+  acp_profile p;
+  assert_int_equal(acp_level_speed_change(ac, 36000.0, 3000.0, 0.0, 0.0, 180.0, 180.0, &p), ACP_OK);
+  CHECK_CLOSE(p.fuel, 0.0, 0.0, 0.0, "no change, no fuel");
+  assert_int_equal(acp_level_speed_change(ac, 36000.0, 3000.0, 0.0, 0.0, 180.0, NAN, &p),
+                   ACP_ERR_INVALID);
+  assert_int_equal(acp_level_speed_change(ac, 36000.0, 3000.0, 0.0, 0.0, 180.0, 0.0, &p),
+                   ACP_ERR_RANGE);
+  /* above VMO (164.6 m/s CAS): a speed limit, named */
+  assert_int_equal(acp_level_speed_change(ac, 36000.0, 0.0, 0.0, 0.0, 150.0, 170.0, &p),
+                   ACP_ERR_RANGE);
+  CHECK_CLOSE(p.limit, ACP_LIMIT_VMO, 0.0, 0.0, "VMO named");
+}
+
 int main(void) {
   const struct CMUnitTest tests[] = {
       cmocka_unit_test(test_table),
@@ -262,7 +322,7 @@ int main(void) {
       cmocka_unit_test(test_logarithmic_time), cmocka_unit_test(test_wind),
       cmocka_unit_test(test_rules_of_thumb), cmocka_unit_test(test_points),
       cmocka_unit_test(test_ceilings), cmocka_unit_test(test_errors),
-      cmocka_unit_test(test_turboprop),
+      cmocka_unit_test(test_turboprop), cmocka_unit_test(test_level_speed_change),
   };
   return cmocka_run_group_tests(tests, setup, teardown);
 }

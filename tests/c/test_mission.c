@@ -76,10 +76,22 @@ static void test_bookkeeping(void **state) {
   CHECK_NAN(t.excess, "no excess");
   CHECK_CLOSE(t.zero_fuel_mass, zfw, 0.1, 0.0, "zero-fuel mass matched to 0.1 kg");
   assert_true(t.iterations >= 2.0 && t.iterations <= 30.0);
-  CHECK_CLOSE(t.climb_distance + t.cruise_distance + t.descent_distance, 500 * ACP_NM, 1.0, 0.0,
-              "phases cover the distance (top of descent to 1 m)");
-  CHECK_CLOSE(t.climb_fuel + t.cruise_fuel + t.descent_fuel, t.trip_fuel, 0.0, 1e-12, "trip fuel");
-  CHECK_CLOSE(t.climb_time + t.cruise_time + t.descent_time, t.trip_time, 0.0, 1e-12, "trip time");
+  CHECK_CLOSE(t.climb_distance + t.climb_acceleration_distance + t.cruise_distance +
+                  t.descent_deceleration_distance + t.descent_distance +
+                  t.approach_deceleration_distance,
+              500 * ACP_NM, 1.0, 0.0, "phases cover the distance (top of descent to 1 m)");
+  CHECK_CLOSE(t.climb_fuel + t.climb_acceleration_fuel + t.cruise_fuel + t.descent_deceleration_fuel +
+                  t.descent_fuel + t.approach_deceleration_fuel,
+              t.trip_fuel, 0.0, 1e-12, "trip fuel");
+  CHECK_CLOSE(t.climb_time + t.climb_acceleration_time + t.cruise_time + t.descent_deceleration_time +
+                  t.descent_time + t.approach_deceleration_time,
+              t.trip_time, 0.0, 1e-12, "trip time");
+  /* the demo jet climbs at Mach 0.76 and cruises at 0.78: it accelerates at
+     the top of climb; it descends at 0.78, so it does not decelerate there,
+     and without approach_cas there is no approach deceleration */
+  assert_true(t.climb_acceleration_time > 0.0 && t.climb_acceleration_fuel > 0.0);
+  CHECK_CLOSE(t.descent_deceleration_time, 0.0, 0.0, 0.0, "descent as fast as the cruise");
+  CHECK_CLOSE(t.approach_deceleration_time, 0.0, 0.0, 0.0, "no approach_cas");
   CHECK_CLOSE(t.takeoff_mass - t.landing_mass, t.trip_fuel, 0.0, 1e-12, "TOW - LW = trip fuel");
   CHECK_CLOSE(t.contingency_fuel, 0.05 * t.trip_fuel, 0.0, 1e-12, "contingency 5 %");
   CHECK_CLOSE(t.alternate_fuel, 0.0, 0.0, 0.0, "no alternate given");
@@ -111,7 +123,14 @@ static void test_bookkeeping(void **state) {
   acp_cruise_result cr;
   assert_int_equal(acp_climb(ac, t.takeoff_mass, 0, 350 * ACP_FL, 0, 0, 0, &cl), ACP_OK);
   CHECK_CLOSE(cl.mass_end, t.top_of_climb_mass, 0.0, 1e-12, "top of climb");
-  assert_int_equal(acp_cruise(ac, ACP_CRUISE_FIXED_MACH, 0, cl.mass_end, 350 * ACP_FL, 0, 0,
+  acp_cruise_point cp;
+  assert_int_equal(acp_cruise_speed(ac, ACP_CRUISE_FIXED_MACH, 0, cl.mass_end, 350 * ACP_FL, 0, 0,
+                                    &cp), ACP_OK);
+  acp_profile acc;
+  assert_int_equal(acp_level_speed_change(ac, cl.mass_end, 350 * ACP_FL, 0, 0, cl.tas_end, cp.tas,
+                                          &acc), ACP_OK);
+  CHECK_CLOSE(acc.fuel, t.climb_acceleration_fuel, 0.0, 1e-12, "acceleration at the top of climb");
+  assert_int_equal(acp_cruise(ac, ACP_CRUISE_FIXED_MACH, 0, acc.mass_end, 350 * ACP_FL, 0, 0,
                               ACP_CRUISE_END_DISTANCE, t.cruise_distance, 0, 0, &cr),
                    ACP_OK);
   CHECK_CLOSE(cr.mass_end, t.top_of_descent_mass, 0.0, 1e-12, "top of descent");
@@ -212,8 +231,10 @@ static void test_trip_step_climbs(void **state) {
   assert_true(step.cruise_altitude_end <= 370 * ACP_FL + 1e-6);
   CHECK_CLOSE(flat.cruise_altitude_end, 310 * ACP_FL, 1e-9, 0.0, "no step climb");
   assert_true(step.trip_fuel < flat.trip_fuel);
-  CHECK_CLOSE(step.climb_distance + step.cruise_distance + step.descent_distance, 1200 * ACP_NM,
-              1.0, 0.0, "distance closes with step climbs");
+  CHECK_CLOSE(step.climb_distance + step.climb_acceleration_distance + step.cruise_distance +
+                  step.descent_deceleration_distance + step.descent_distance +
+                  step.approach_deceleration_distance,
+              1200 * ACP_NM, 1.0, 0.0, "distance closes with step climbs");
   acp_mission_free(m);
   acp_aircraft_free(ac);
 }
@@ -352,12 +373,68 @@ static void test_bad_arguments(void **state) {
   acp_aircraft_free(ac);
 }
 
+/* The whole profile: a descent slower than the cruise decelerates at the top
+   of descent, and a descent that ends at descent_end_height decelerates to
+   approach_cas there. Each segment is recomposed from the public functions
+   (acp_climb, acp_level_speed_change, acp_cruise, acp_descent) at the trip's
+   own masses, and the segments add up to the trip (bookkeeping identities). */
+static void test_whole_profile(void **state) {
+  (void)state;
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
+  assert_int_equal(acp_aircraft_set(ac, "descent_mach", 0.74), ACP_OK);
+  assert_int_equal(acp_aircraft_set(ac, "approach_cas", 140 * ACP_KT), ACP_OK);
+  acp_mission *m = sector(500, 350);
+  const double h_end = 1500 * ACP_FT;
+  assert_int_equal(acp_mission_set(m, "descent_end_height", h_end), ACP_OK);
+  acp_trip_result t;
+  assert_int_equal(acp_trip(ac, m, 36000, &t), ACP_OK);
+  assert_true(t.descent_deceleration_time > 0.0 && t.descent_deceleration_fuel > 0.0);
+  assert_true(t.approach_deceleration_time > 0.0 && t.approach_deceleration_fuel > 0.0);
+  CHECK_CLOSE(t.climb_fuel + t.climb_acceleration_fuel + t.cruise_fuel + t.descent_deceleration_fuel +
+                  t.descent_fuel + t.approach_deceleration_fuel,
+              t.trip_fuel, 0.0, 1e-12, "six segments make the trip fuel");
+  CHECK_CLOSE(t.climb_distance + t.climb_acceleration_distance + t.cruise_distance +
+                  t.descent_deceleration_distance + t.descent_distance +
+                  t.approach_deceleration_distance,
+              500 * ACP_NM, 1.0, 0.0, "six segments cover the distance");
+  /* recomposition */
+  acp_profile cl, acc, dec, de, app;
+  acp_cruise_point cp;
+  acp_cruise_result cr;
+  acp_profile_point top;
+  assert_int_equal(acp_climb(ac, 36000, 0, 350 * ACP_FL, 0, 0, 0, &cl), ACP_OK);
+  assert_int_equal(acp_cruise_speed(ac, ACP_CRUISE_FIXED_MACH, 0, cl.mass_end, 350 * ACP_FL, 0, 0,
+                                    &cp), ACP_OK);
+  assert_int_equal(acp_level_speed_change(ac, cl.mass_end, 350 * ACP_FL, 0, 0, cl.tas_end, cp.tas,
+                                          &acc), ACP_OK);
+  assert_int_equal(acp_cruise(ac, ACP_CRUISE_FIXED_MACH, 0, acc.mass_end, 350 * ACP_FL, 0, 0,
+                              ACP_CRUISE_END_DISTANCE, t.cruise_distance, 0, 0, &cr), ACP_OK);
+  CHECK_CLOSE(cr.mass_end, t.top_of_descent_mass, 0.0, 1e-12, "top of descent");
+  assert_int_equal(acp_descent_point(ac, cr.mass_end, 350 * ACP_FL, 0, 0, &top), ACP_OK);
+  CHECK_CLOSE(top.mach, 0.74, 0.0, 1e-9, "the descent starts at its Mach");
+  assert_int_equal(acp_level_speed_change(ac, cr.mass_end, 350 * ACP_FL, 0, 0, cr.tas_end, top.tas,
+                                          &dec), ACP_OK);
+  CHECK_CLOSE(dec.fuel, t.descent_deceleration_fuel, 0.0, 1e-12, "top-of-descent deceleration");
+  assert_int_equal(acp_descent(ac, dec.mass_end, 350 * ACP_FL, h_end, 0, 0, 0, &de), ACP_OK);
+  CHECK_CLOSE(de.fuel, t.descent_fuel, 0.0, 1e-12, "descent to 1,500 ft");
+  assert_int_equal(acp_level_speed_change(ac, de.mass_end, h_end, 0, 0, de.tas_end,
+                                          acp_cas_to_tas(140 * ACP_KT, h_end, 0), &app), ACP_OK);
+  CHECK_CLOSE(app.fuel, t.approach_deceleration_fuel, 0.0, 1e-12, "approach deceleration");
+  CHECK_CLOSE(app.mass_end, t.landing_mass, 0.0, 1e-12, "the landing mass");
+  /* the cruise must now lie above the end of the descent */
+  assert_int_equal(acp_mission_set(m, "cruise_altitude", 1000 * ACP_FT), ACP_OK);
+  assert_int_equal(acp_trip(ac, m, 36000, &t), ACP_ERR_RANGE);
+  CHECK_CLOSE(t.infeasible, ACP_TRIP_CRUISE_TOO_LOW, 0.0, 0.0, "cruise below the descent's end");
+  acp_mission_free(m);
+  acp_aircraft_free(ac);
+}
+
 int main(void) {
   const struct CMUnitTest tests[] = {
       cmocka_unit_test(test_mission_keys),   cmocka_unit_test(test_bookkeeping),
       cmocka_unit_test(test_policy),         cmocka_unit_test(test_modes_and_wind),
       cmocka_unit_test(test_trip_step_climbs), cmocka_unit_test(test_infeasible),
-      cmocka_unit_test(test_bad_arguments),
+      cmocka_unit_test(test_bad_arguments),  cmocka_unit_test(test_whole_profile),
   };
   return cmocka_run_group_tests(tests, NULL, NULL);
 }

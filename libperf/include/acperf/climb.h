@@ -26,6 +26,7 @@
 #include "acperf/export.h"
 #include "acperf/schedule.h"
 
+#define ACP_SPEED_CHANGE_STEPS 12 /**< TAS steps of a level speed change (its bound on work) */
 #define ACP_CLIMB_STEP_DEFAULT 609.6 /**< default pressure-altitude step, m (2,000 ft): Simpson steps cut at every kink (docs/methods/climb.md) */
 
 ACP_BEGIN_DECLS
@@ -148,6 +149,28 @@ ACP_API int acp_descent_trace(const acp_aircraft *ac, double mass, double hp_sta
                               double hp_end, double dtemp, double wind, double step,
                               size_t capacity, acp_profile_point *points, size_t *count,
                               acp_profile *out);
+
+/**
+ * A level speed change at one pressure altitude from tas_start to tas_end:
+ * an acceleration at the maximum-climb rating, or a deceleration at flight
+ * idle, integrated as the speed change inside a profile (dV/dt = (T - D)/m
+ * in ACP_SPEED_CHANGE_STEPS steps of TAS, the trapezoidal rule on dt/dV,
+ * dx/dV and dm/dV). The trip uses it at the top of climb (to the cruise
+ * speed), the top of descent (to the descent speed) and at the end of the
+ * descent (to approach_cas).
+ *
+ * @param tas_start, tas_end  true airspeeds (m/s), > 0, within the aircraft's
+ *                   speed limits (cl_max, vmo, mmo); equal speeds give zeros
+ * @param out        out: time, distance, fuel (also in the speed_change_*
+ *                   fields), mass_end, tas_end; the limit fields
+ * @return ACP_OK; ACP_ERR_INVALID; ACP_ERR_RANGE (as acp_climb(), a speed
+ *         outside the limits or the models: `limit` names an aircraft
+ *         limit); ACP_ERR_THRUST (the specific excess power is below
+ *         10 ft/min at either end: the change would take unbounded time).
+ */
+ACP_API int acp_level_speed_change(const acp_aircraft *ac, double mass, double hp, double dtemp,
+                                   double wind, double tas_start, double tas_end,
+                                   acp_profile *out);
 
 /**
  * Ceilings at a mass: the altitudes where the climb rate along the climb

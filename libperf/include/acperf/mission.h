@@ -7,11 +7,19 @@
  * A mission (an opaque object with keyed set/get, like acp_aircraft) holds
  * the route, the cruise and the fuel policy; acp_trip() flies it from a
  * take-off mass, acp_trip_for_zero_fuel_mass() finds the take-off mass for a
- * zero-fuel mass. The trip is a climb from the origin's pressure altitude to
- * the cruise altitude (acp_climb()), a cruise in a speed mode (acp_cruise())
- * and a descent to the destination's pressure altitude (acp_descent()), with
- * the cruise distance = distance - climb distance - descent distance (the top
- * of descent is found by iterating on the descent's start mass).
+ * zero-fuel mass. The trip is six segments: a climb from the origin's
+ * pressure altitude to the cruise altitude (acp_climb()); a level speed change
+ * there to the cruise speed (acp_level_speed_change()); a cruise in a speed
+ * mode (acp_cruise()); a level deceleration to the descent schedule's speed
+ * at the top of descent, when that is slower (a faster descent starts at its
+ * speed: the acceleration in the descent's first part is not modelled); a
+ * descent to the destination's pressure altitude plus descent_end_height
+ * (acp_descent()); and a level deceleration there to the aircraft's
+ * approach_cas, when it has one. The cruise distance is the distance less the
+ * other segments' (the top of descent is found by iterating on the mass and
+ * level at the end of the cruise). Every segment books time, distance and
+ * fuel the same way, so trip fuel = take-off mass - landing mass = the sum of
+ * the six segments' fuel.
  *
  * Fuel policy (keys below): block fuel = taxi + trip + contingency +
  * alternate + final reserve. Contingency is a fraction of the trip fuel
@@ -46,6 +54,7 @@
  * | alternate_fuel       | kg     | 0 to 1e6         | 0 |
  * | final_reserve_time   | s      | 0 to 14,400      | 1,800 (typical default) |
  * | holding_height       | m      | 0 to 10,000      | 457.2 (1,500 ft, typical default) |
+ * | descent_end_height   | m      | 0 to 3,000       | 0: where the descent (and the deceleration to approach_cas) ends, above the destination; the final approach below it is not modelled |
  */
 #ifndef ACPERF_MISSION_H
 #define ACPERF_MISSION_H
@@ -94,14 +103,15 @@ typedef struct {
   double landing_mass;
   double zero_fuel_mass;
   double ramp_mass;           /**< take-off mass + taxi fuel */
-  double trip_fuel;           /**< climb + cruise + descent */
+  double trip_fuel;           /**< climb + its acceleration + cruise + the descent's
+                                   deceleration + descent + the approach deceleration */
   double taxi_fuel;
   double contingency_fuel;
   double alternate_fuel;
   double final_reserve_fuel;
   double block_fuel;          /**< taxi + trip + contingency + alternate + final reserve */
   double takeoff_fuel;        /**< fuel on board at take-off: block - taxi */
-  double trip_time;           /**< s, climb + cruise + descent */
+  double trip_time;           /**< s, the same six segments */
   double block_time;          /**< s, taxi_time + trip_time (taxi-in not modelled) */
   double climb_time, climb_distance, climb_fuel;
   double cruise_time, cruise_distance, cruise_fuel;
@@ -111,6 +121,19 @@ typedef struct {
   double cruise_altitude_end; /**< after step climbs, m */
   double cruise_sar_mean;     /**< cruise distance/fuel, m/kg */
   double iterations;          /**< iterations of acp_trip_for_zero_fuel_mass() (1 for acp_trip()) */
+  double climb_acceleration_time;     /**< s: level speed change from the climb speed to the
+                                           cruise speed at the cruise altitude (top of climb) */
+  double climb_acceleration_distance; /**< m of it */
+  double climb_acceleration_fuel;     /**< kg of it */
+  double descent_deceleration_time;   /**< s: level deceleration from the cruise speed to the
+                                           descent speed at the top of descent (0 when the
+                                           descent is not slower) */
+  double descent_deceleration_distance; /**< m of it */
+  double descent_deceleration_fuel;     /**< kg of it */
+  double approach_deceleration_time;  /**< s: level deceleration to approach_cas at the end of
+                                           the descent (0 without approach_cas) */
+  double approach_deceleration_distance; /**< m of it */
+  double approach_deceleration_fuel;     /**< kg of it */
 } acp_trip_result;
 
 /** A mission with the typical defaults; NULL when out of memory. Free with acp_mission_free(). */
