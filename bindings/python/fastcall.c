@@ -36,7 +36,7 @@
 
 enum { ACPF_PLAIN, ACPF_NAN, ACPF_STATUS };
 #define ACPF_MAX_IN 16
-#define ACPF_MAX_OUT 32
+#define ACPF_MAX_OUT 48
 /* Named results kept for refilling: two, so that a loop that stores each result
    in the same variable (r = isa(h)) refills the one before last. */
 #define ACPF_SPARES 2

@@ -510,11 +510,17 @@ static double ceiling(const phase *ph, double mass, double rate) {
   return ACP_NAN;
 }
 
-/* Specific air range at cruise_mach at hp (NaN where level flight fails). */
+/* Specific air range at cruise_mach at hp (NaN where level flight fails or
+   leaves the speed limits: cl_max, mmo, vmo). */
 static double sar_at(const acp_aircraft *ac, double mass, double hp, double dtemp) {
   acp_atmos at;
   if (acp_isa(hp, dtemp, &at) != ACP_OK) return ACP_NAN;
-  return perf_sar(ac, mass, &at, ac_value(ac, AK_CRUISE_MACH) * at.sound_speed, 0.0);
+  const double mach = ac_value(ac, AK_CRUISE_MACH), tas = mach * at.sound_speed;
+  perf_limit lim;
+  if (perf_speed_envelope(ac, perf_lift_coefficient(ac, mass, &at, tas), mach,
+                          acp_mach_to_cas(mach, hp), &lim) != ACP_OK)
+    return ACP_NAN;
+  return perf_sar(ac, mass, &at, tas, 0.0);
 }
 
 /* Altitude of the greatest SAR at or below top where level flight holds: a

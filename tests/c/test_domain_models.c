@@ -161,6 +161,11 @@ static int w_acp_descent(const double *x, double *o) {
   acp_profile r;
   return outputs(acp_descent(g_jet, x[0], x[1], x[2], x[3], x[4], x[5], &r), FIELDS(r), o);
 }
+static int w_acp_level_speed_change(const double *x, double *o) {
+  acp_profile r;
+  return outputs(acp_level_speed_change(g_jet, x[0], x[1], x[2], x[3], x[4], x[5], &r), FIELDS(r),
+                 o);
+}
 static int w_acp_ceilings(const double *x, double *o) {
   acp_ceiling_set s;
   const int st = acp_ceilings(g_jet, x[0], x[1], &s);
@@ -286,6 +291,9 @@ static void test_edges(void **state) {
           WIND_OUT, closed(10, 1000, R)),
       ROW(acp_descent, w_acp_descent, 0, 6, NOM(30000, 3000, 0, 0, 0, 0), MASS_OUT, HP_OUT, HP_OUT,
           DT_OUT, WIND_OUT, closed(10, 1000, R)),
+      ROW(acp_level_speed_change, w_acp_level_speed_change, 0, 6, NOM(30000, 3000, 0, 0, 150, 160),
+          MASS_OUT, HP_OUT, DT_OUT, WIND_OUT, ((bound){NAN, 0.0, NAN, INF, R, NOEDGE}),
+          ((bound){NAN, 0.0, NAN, INF, R, NOEDGE})),
       ROW(acp_ceilings, w_acp_ceilings, 0, 2, NOM(30000, 0), MASS_OUT, DT_OUT),
       /* cruise */
       /* (a TSFC below about 1e-300 overflows the range: NaN, documented; 1e-300 inside) */

@@ -43,10 +43,13 @@ POOLS = {
     "load_factor": [1.0, 1.5, 20.0],
     "bank": [0.0, 0.5, 2.0],
     # profiles (climb.h): valid climbs and descents among the pairs, and bad ones
-    "hp_start": [457.2, 10668.0, 90000.0],
+    "hp_start": [457.2, 6000.0, 10668.0, 90000.0],
     "hp_end": [6000.0, 457.2],
     "wind": [0.0, -20.0],
     "step": [0.0, 300.0, 5.0],
+    # level speed changes (climb.h): accelerating, decelerating, beyond VMO or the stall
+    "tas_start": [80.0, 150.0, 0.0],
+    "tas_end": [100.0, 160.0],
     # engines (propulsion.h)
     "rating": [1.0, 3.0, 7.0],
     "thrust": [2000.0, 20000.0, -1.0, 1.0e7],

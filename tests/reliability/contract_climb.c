@@ -40,8 +40,24 @@ static void check_point(contract *c, const char *fn, int st, const acp_profile_p
   contract_close(c, fn, "energy equation", p->rate, rate, 1e-12, 1e-9);
 }
 
-static void check_profile(contract *c, const char *fn, int st, const acp_profile *r, double mass) {
+/* The lowest mass a profile may reach: the empty mass, else 1 kg (climb.h). */
+static double mass_floor(const acp_aircraft *ac) {
+  double oew = NAN;
+  acp_aircraft_get(ac, "mass_operating_empty", &oew);
+  return isnan(oew) ? 1.0 : oew;
+}
+
+static void check_profile(contract *c, const char *fn, int st, const acp_profile *r,
+                          const acp_aircraft *ac, double mass) {
   contract_code(c, fn, st, ALLOWED | ST(ACP_ERR_THRUST));
+  if (st == ACP_OK)
+    contract_expect(c, r->limit == ACP_LIMIT_NONE && r->limit_excess == 0.0 &&
+                           r->mass_end >= mass_floor(ac),
+                    fn, "ACP_OK below the empty mass or with a limit named");
+  if (st == ACP_ERR_RANGE && !isnan(r->limit))
+    contract_expect(c, r->limit >= ACP_LIMIT_MASS_MAX_TAKEOFF && r->limit <= ACP_LIMIT_MMO &&
+                           r->limit_excess > 0.0,
+                    fn, "a limit named without a positive excess");
   /* rates and accelerations are at least 10 ft/min of specific excess power */
   contract_value(c, fn, r->time, 0.0, 1e7);
   contract_value(c, fn, r->distance, -1e10, 1e10);
@@ -67,7 +83,7 @@ static void profiles(contract *c, const acp_aircraft *ac, double mass, double dt
   const char *fnt = descent ? "acp_descent_trace" : "acp_climb_trace";
   const int st = descent ? acp_descent(ac, mass, start, end, dt, wind, step, &r)
                          : acp_climb(ac, mass, start, end, dt, wind, step, &r);
-  check_profile(c, fn, st, &r, mass);
+  check_profile(c, fn, st, &r, ac, mass);
   if (start == end) contract_expect(c, st != ACP_OK, fn, "no altitude change accepted");
   size_t need = 0, got = 0;
   /* size query: capacity 0 */
@@ -81,7 +97,7 @@ static void profiles(contract *c, const acp_aircraft *ac, double mass, double dt
   if (!pts) return;
   const int t = descent ? acp_descent_trace(ac, mass, start, end, dt, wind, step, need, pts, &got, &rt)
                         : acp_climb_trace(ac, mass, start, end, dt, wind, step, need, pts, &got, &rt);
-  check_profile(c, fnt, t, &rt, mass);
+  check_profile(c, fnt, t, &rt, ac, mass);
   contract_expect(c, t == st, fnt, "status differs from the form without a trace");
   if (t == ACP_OK && st == ACP_OK) {
     contract_same(c, fnt, "time", rt.time, r.time);
@@ -103,6 +119,22 @@ static void profiles(contract *c, const acp_aircraft *ac, double mass, double dt
     }
   }
   free(pts);
+}
+
+/* A level speed change: the profile's contract, the end speed, no change no cost. */
+static void speed_change(contract *c, const acp_aircraft *ac, double mass, double hp, double dt,
+                         double wind) {
+  const char *fn = "acp_level_speed_change";
+  const double v0 = contract_range(c, 20.0, 320.0);
+  const double v1 = contract_pick(c, 8) ? contract_range(c, 20.0, 320.0) : v0;
+  acp_profile r;
+  const int st = acp_level_speed_change(ac, mass, hp, dt, wind, v0, v1, &r);
+  check_profile(c, fn, st, &r, ac, mass);
+  if (st != ACP_OK) return;
+  contract_expect(c, r.tas_end == v1, fn, "the end speed is not the one asked for");
+  contract_expect(c, r.time == r.speed_change_time && r.fuel == r.speed_change_fuel, fn,
+                  "the totals differ from the speed change's");
+  if (v0 == v1) contract_expect(c, r.time == 0.0 && r.fuel == 0.0, fn, "no change that costs");
 }
 
 /* A small climb table: the count of cells without a result, time, distance
@@ -182,8 +214,10 @@ void contract_climb(contract *c) {
                          isnan(p.rate),
                   "acp_climb_point/acp_descent_point", "NULL accepted");
   if (contract_sampled(c)) {
-    const unsigned kind = contract_pick(c, 6);
-    if (kind == 5) {
+    const unsigned kind = contract_pick(c, 7);
+    if (kind == 6) {
+      speed_change(c, ac, mass, hp, dt, wind);
+    } else if (kind == 5) {
       table(c, ac, own != NULL, dt, wind);
     } else if (kind == 0) {
       acp_ceiling_set s;
@@ -205,6 +239,16 @@ void contract_climb(contract *c) {
       if (cs != ACP_OK)
         contract_expect(c, isnan(s.service_ceiling) && isnan(s.optimum_altitude), fn,
                         "an output not NaN on error");
+      double mach = NAN;
+      acp_aircraft_get(ac, "cruise_mach", &mach);
+      if (cs == ACP_OK && !isnan(s.best_cruise_altitude)) { /* level flight holds there */
+        double sar;
+        const double v = mach * acp_isa_sound_speed(s.best_cruise_altitude, dt);
+        contract_expect(c, acp_specific_air_range(ac, mass, s.best_cruise_altitude, dt, v, 0.0,
+                                                  &sar) == ACP_OK &&
+                               !(s.best_cruise_altitude > s.max_cruise_altitude),
+                        fn, "a best cruise altitude where level flight fails or above the limits");
+      }
     } else {
       profiles(c, ac, mass, dt, wind, descent);
     }

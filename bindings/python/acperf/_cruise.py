@@ -33,14 +33,15 @@ END_DISTANCE, END_FUEL, END_TIME = _c.ACP_CRUISE_END_DISTANCE, _c.ACP_CRUISE_END
 CruisePoint = result_type(
     "CruisePoint",
     ("time", "distance", "hp", "mass", "tas", "cas", "mach", "ground_speed", "drag",
-     "fuel_flow", "tsfc", "lift_to_drag", "sar", "limit"),
+     "fuel_flow", "tsfc", "lift_to_drag", "sar", "limit", "buffet_margin", "limit_exceeded",
+     "limit_excess"),
     "Level flight at a cruise point (the fields of acp_cruise_point); in a trace each "
     "field is an array over the points.")
 CruiseResult = result_type(
     "CruiseResult",
     ("time", "distance", "fuel", "mass_end", "hp_end", "sar_mean", "tas_start", "tas_end",
      "mach_start", "mach_end", "step_climbs", "step_climb_time", "step_climb_distance",
-     "step_climb_fuel"),
+     "step_climb_fuel", "limit", "limit_excess", "buffet_margin_min"),
     "Totals of a cruise (the fields of acp_cruise_result).")
 CruiseSpeeds = result_type(
     "CruiseSpeeds", ("tas", "mach", "sar"),
@@ -52,7 +53,10 @@ TripResult = result_type(
      "block_fuel", "takeoff_fuel", "trip_time", "block_time", "climb_time", "climb_distance",
      "climb_fuel", "cruise_time", "cruise_distance", "cruise_fuel", "descent_time",
      "descent_distance", "descent_fuel", "top_of_climb_mass", "top_of_descent_mass",
-     "cruise_altitude_end", "cruise_sar_mean", "iterations"),
+     "cruise_altitude_end", "cruise_sar_mean", "iterations", "climb_acceleration_time",
+     "climb_acceleration_distance", "climb_acceleration_fuel", "descent_deceleration_time",
+     "descent_deceleration_distance", "descent_deceleration_fuel", "approach_deceleration_time",
+     "approach_deceleration_distance", "approach_deceleration_fuel"),
     "A trip and its fuel (the fields of acp_trip_result).")
 
 

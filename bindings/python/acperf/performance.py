@@ -18,7 +18,8 @@ __all__ = ["SchedulePoint", "EnginePoint", "ProfilePoint", "Profile", "CeilingSe
            "RATING_MAXIMUM", "RATING_CLIMB", "RATING_CRUISE", "RATING_IDLE",
            "speed_schedule", "acceleration_factor", "turbofan_thrust_lapse", "turbofan_tsfc",
            "piston_power_lapse", "engine_rating", "engine_thrust", "climb_point",
-           "descent_point", "climb", "descent", "climb_trace", "descent_trace", "ceilings",
+           "descent_point", "climb", "descent", "level_speed_change", "climb_trace",
+           "descent_trace", "ceilings",
            "ClimbTable", "climb_table"]
 
 MODE_LOW_CAS, MODE_CAS, MODE_MACH = _c.ACP_MODE_LOW_CAS, _c.ACP_MODE_CAS, _c.ACP_MODE_MACH
@@ -36,18 +37,19 @@ EnginePoint = result_type(
 ProfilePoint = result_type(
     "ProfilePoint",
     ("time", "distance", "hp", "mass", "tas", "cas", "mach", "rate", "gradient", "thrust",
-     "drag", "fuel_flow", "acceleration_factor", "mode"),
+     "drag", "fuel_flow", "acceleration_factor", "mode", "limit", "limit_excess"),
     "One point of a climb or descent (the fields of acp_profile_point); in a trace each "
     "field is an array over the points.")
 Profile = result_type(
     "Profile",
     ("time", "distance", "fuel", "mass_end", "tas_end", "speed_change_time",
-     "speed_change_distance", "speed_change_fuel"),
+     "speed_change_distance", "speed_change_fuel", "limit", "limit_excess"),
     "Totals of a climb or descent (the fields of acp_profile).")
 CeilingSet = result_type(
     "CeilingSet",
     ("service_ceiling", "max_climb_altitude", "buffet_altitude", "max_cruise_altitude",
-     "optimum_altitude"),
+     "optimum_altitude", "optimum_limit", "best_cruise_altitude", "best_cruise_limit",
+     "max_cruise_limit"),
     "Ceilings and optimum altitude at a mass (the fields of acp_ceiling_set).")
 
 _AC = ("ac",)
@@ -73,6 +75,9 @@ climb_point = bind("climb_point", _c.acp_climb_point, None,
 descent_point = bind("descent_point", _c.acp_descent_point, None,
                      ("ac", "mass", "hp", "dtemp", "wind"), {"dtemp": 0.0, "wind": 0.0},
                      result=ProfilePoint, models=_AC)
+level_speed_change = bind("level_speed_change", _c.acp_level_speed_change, None,
+                          ("ac", "mass", "hp", "dtemp", "wind", "tas_start", "tas_end"),
+                          result=Profile, models=_AC)
 _PROFILE = ("ac", "mass", "hp_start", "hp_end", "dtemp", "wind", "step")
 _PROFILE_DEFAULTS = {"dtemp": 0.0, "wind": 0.0, "step": 0.0}
 climb = bind("climb", _c.acp_climb, None, _PROFILE, _PROFILE_DEFAULTS, result=Profile,
