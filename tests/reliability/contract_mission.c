@@ -23,13 +23,16 @@ static const struct {
     {"taxi_fuel", 0.0, 1e5, 0, 0},           {"contingency_fraction", 0.0, 0.5, 0, 0},
     {"contingency_minimum", 0.0, 1e5, 0, 0}, {"alternate_fuel", 0.0, 1e6, 0, 0},
     {"final_reserve_time", 0.0, 14400.0, 0, 0}, {"holding_height", 0.0, 10000.0, 0, 0},
+    {"descent_end_height", 0.0, 3000.0, 0, 0},
 };
 #define NKEYS (sizeof KEYS / sizeof KEYS[0])
 
 /* status that goes with each acp_trip_infeasible value */
 static const int INFEASIBLE_STATUS[] = {ACP_OK, ACP_ERR_RANGE, ACP_ERR_RANGE, ACP_ERR_RANGE,
                                         ACP_ERR_RANGE, ACP_ERR_RANGE, ACP_ERR_RANGE,
-                                        ACP_ERR_THRUST, ACP_ERR_THRUST, ACP_ERR_RANGE, ACP_ERR_RANGE};
+                                        ACP_ERR_THRUST, ACP_ERR_THRUST, ACP_ERR_RANGE, ACP_ERR_RANGE,
+                                        ACP_ERR_RANGE, ACP_ERR_RANGE};
+#define INFEASIBLE_MAX ((int)(sizeof INFEASIBLE_STATUS / sizeof INFEASIBLE_STATUS[0]) - 1)
 
 static void keys(contract *c, acp_mission *m) {
   const unsigned k = contract_pick(c, (unsigned)NKEYS);
@@ -59,16 +62,18 @@ static void keys(contract *c, acp_mission *m) {
                   "acp_mission_set/get", "unknown key or NULL accepted");
 }
 
-static void check_trip(contract *c, const char *fn, int st, const acp_trip_result *r, double distance) {
+static void check_trip(contract *c, const char *fn, int st, const acp_trip_result *r, double distance,
+                       const acp_aircraft *ac) {
   contract_code(c, fn, st, ST(ACP_ERR_INVALID) | ST(ACP_ERR_RANGE) | ST(ACP_ERR_THRUST) |
                                ST(ACP_ERR_NO_CONVERGENCE));
-  contract_value(c, fn, r->infeasible, 0.0, 10.0);
+  contract_value(c, fn, r->infeasible, 0.0, INFEASIBLE_MAX);
   contract_value(c, fn, r->trip_fuel, 0x1p-1074, 1e6);
   contract_value(c, fn, r->block_fuel, 0x1p-1074, 1e6);
   contract_value(c, fn, r->takeoff_mass, 1.0, 1e6);
   if (!isnan(r->infeasible)) {
     const int inf = (int)r->infeasible;
-    contract_expect(c, r->infeasible == inf && inf >= 0 && inf <= 10 && INFEASIBLE_STATUS[inf] == st,
+    contract_expect(c, r->infeasible == inf && inf >= 0 && inf <= INFEASIBLE_MAX &&
+                           INFEASIBLE_STATUS[inf] == st,
                     fn, "infeasible value does not go with the status");
     /* excess: NaN when feasible and for the thrust kinds (no amount), else >= 0 */
     const int amount = inf != 0 && inf != ACP_TRIP_CANNOT_CLIMB && inf != ACP_TRIP_CANNOT_CRUISE;
@@ -89,10 +94,19 @@ static void check_trip(contract *c, const char *fn, int st, const acp_trip_resul
     contract_close(c, fn, "block fuel", r->block_fuel,
                    r->taxi_fuel + r->trip_fuel + r->contingency_fuel + r->alternate_fuel + r->final_reserve_fuel,
                    1e-6, 1e-12);
-    contract_close(c, fn, "trip fuel", r->trip_fuel, r->climb_fuel + r->cruise_fuel + r->descent_fuel, 1e-6, 1e-12);
+    contract_close(c, fn, "trip fuel", r->trip_fuel,
+                   r->climb_fuel + r->climb_acceleration_fuel + r->cruise_fuel +
+                       r->descent_deceleration_fuel + r->descent_fuel + r->approach_deceleration_fuel,
+                   1e-6, 1e-12);
+    double oew = NAN;
+    acp_aircraft_get(ac, "mass_operating_empty", &oew);
+    contract_expect(c, !(r->zero_fuel_mass < oew - 0.1), fn, "a zero-fuel mass below the empty mass");
     contract_close(c, fn, "ramp = take-off + taxi", r->ramp_mass, r->takeoff_mass + r->taxi_fuel, 1e-6, 1e-12);
     contract_close(c, fn, "take-off fuel = block - taxi", r->takeoff_fuel, r->block_fuel - r->taxi_fuel, 1e-6, 1e-12);
-    contract_close(c, fn, "distance flown", r->climb_distance + r->cruise_distance + r->descent_distance,
+    contract_close(c, fn, "distance flown",
+                   r->climb_distance + r->climb_acceleration_distance + r->cruise_distance +
+                       r->descent_deceleration_distance + r->descent_distance +
+                       r->approach_deceleration_distance,
                    distance, 1.0, 1e-6);
   } else if (isnan(r->infeasible) || r->infeasible != 0.0) {
     contract_expect(c, isnan(r->takeoff_mass) && isnan(r->trip_fuel) && isnan(r->block_fuel), fn,
@@ -122,7 +136,7 @@ void contract_mission(contract *c) {
     if (contract_pick(c, 4)) {
       const double tow = contract_range(c, 0.5, 1.05) * mtow;
       const int st = acp_trip(ac, m, tow, &r);
-      check_trip(c, "acp_trip", st, &r, d);
+      check_trip(c, "acp_trip", st, &r, d, ac);
       if (st == ACP_OK) {
         contract_expect(c, r.takeoff_mass == tow && r.iterations == 1.0, "acp_trip",
                         "take-off mass not the one given, or iterations not 1");
@@ -130,7 +144,7 @@ void contract_mission(contract *c) {
     } else {
       const double zfm = contract_range(c, 0.5, 0.9) * mtow;
       const int st = acp_trip_for_zero_fuel_mass(ac, m, zfm, &r);
-      check_trip(c, "acp_trip_for_zero_fuel_mass", st, &r, d);
+      check_trip(c, "acp_trip_for_zero_fuel_mass", st, &r, d, ac);
       if (st == ACP_OK) {
         contract_close(c, "acp_trip_for_zero_fuel_mass", "zero-fuel mass met", r.zero_fuel_mass, zfm, 0.1, 0);
         acp_trip_result again;
