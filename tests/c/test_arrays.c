@@ -7,7 +7,8 @@
    - bounded work: a NULL required input makes every element invalid and the
      call returns n without evaluating anything, so with every output NULL it
      returns at once whatever n is (n = 2^40 here; the ctest has a TIMEOUT,
-     tests/CMakeLists.txt).
+     tests/CMakeLists.txt). The climb table's cell count
+     n_mass n_hp n_dtemp may overflow in either product: SIZE_MAX.
 
    The reference of every check is the contract itself: the out-of-place call
    for the in-place results, n (all invalid) for a NULL input. The inputs mix
@@ -252,10 +253,35 @@ static void test_null_input_outputs_nan(void **state) {
   }
 }
 
+/* The climb table: NULL required inputs with huge dimensions return at once;
+   a cell count that overflows a size_t, in the product n_hp n_dtemp or in
+   the product with n_mass, is SIZE_MAX (contract: climb.h). The altitudes
+   given are out of order, so a table the size check lets through returns
+   after reading two of them. */
+static void test_climb_table_bounds(void **state) {
+  (void)state;
+  const double mass[1] = {30000}, hp[2] = {3000, 1000}, dt[1] = {0};
+  assert_int_equal(acp_climb_table(g_jet, 0, 0, 0, HUGE_N, NULL, 1, hp, 1, dt, NULL, NULL, NULL),
+                   HUGE_N);
+  assert_int_equal(acp_climb_table(g_jet, 0, 0, 0, 1, mass, HUGE_N, NULL, 1, dt, NULL, NULL, NULL),
+                   HUGE_N);
+  assert_int_equal(acp_climb_table(NULL, 0, 0, 0, 1, mass, 2, hp, HUGE_N, dt, NULL, NULL, NULL),
+                   2 * HUGE_N);
+  /* 2^33 2^31 = 2^64 wraps to 0 */
+  assert_int_equal(acp_climb_table(g_jet, 0, 0, 0, 1, mass, (size_t)1 << 33, hp, (size_t)1 << 31,
+                                   dt, NULL, NULL, NULL),
+                   SIZE_MAX);
+  /* 2^40 (2^30 1) = 2^70 wraps to 0 */
+  assert_int_equal(acp_climb_table(g_jet, 0, 0, 0, HUGE_N, mass, (size_t)1 << 30, hp, 1, dt, NULL,
+                                   NULL, NULL),
+                   SIZE_MAX);
+}
+
 int main(void) {
   const struct CMUnitTest tests[] = {
       cmocka_unit_test(test_every_form_listed), cmocka_unit_test(test_in_place),
       cmocka_unit_test(test_null_huge_n),       cmocka_unit_test(test_null_input_outputs_nan),
+      cmocka_unit_test(test_climb_table_bounds),
   };
   return cmocka_run_group_tests(tests, setup, teardown);
 }
