@@ -1,6 +1,15 @@
 /* The aircraft text format: a strict subset of TOML 1.0 (docs/aircraft-format.md).
    Line by line, no allocation: the model is built in a copy on the stack and
    replaces the caller's only when the whole text is good. */
+#if defined(__unix__) || defined(__APPLE__)
+#define _POSIX_C_SOURCE 200809L /* open, fstat, fcntl, fdopen */
+#define ACP_POSIX_FILES 1
+#include <fcntl.h>
+#include <sys/stat.h>
+#include <unistd.h>
+#elif defined(_WIN32)
+#include <sys/stat.h>
+#endif
 #include <locale.h>
 #include <stdarg.h>
 #include <stdio.h>
@@ -313,15 +322,51 @@ int acp_aircraft_parse(acp_aircraft *ac, const char *text, char *err, size_t err
   return parser_end(&p, ac);
 }
 
+/* fopen(path, "rb") of a regular file only: anything else (a FIFO, which
+   blocks in open() or read() until a writer comes, a device, a directory) is
+   refused; *not_regular tells which failure it was. */
+static FILE *open_regular(const char *path, int *not_regular) {
+  *not_regular = 0;
+#ifdef ACP_POSIX_FILES
+  const int fd = open(path, O_RDONLY | O_NONBLOCK | O_CLOEXEC); /* a FIFO opens at once */
+  if (fd < 0) return NULL;
+  struct stat st;
+  FILE *f = NULL;
+  if (fstat(fd, &st) == 0) {
+    const int flags = fcntl(fd, F_GETFL);
+    if (!S_ISREG(st.st_mode))
+      *not_regular = 1;
+    else if (flags >= 0 && fcntl(fd, F_SETFL, flags & ~O_NONBLOCK) == 0)
+      f = fdopen(fd, "rb");
+  }
+  if (!f) close(fd);
+  return f;
+#else
+  FILE *f = fopen(path, "rb");
+#ifdef _WIN32
+  struct _stat st;
+  if (f && (_fstat(_fileno(f), &st) != 0 || (st.st_mode & _S_IFMT) != _S_IFREG)) {
+    *not_regular = 1;
+    fclose(f);
+    return NULL;
+  }
+#endif
+  return f;
+#endif
+}
+
 int acp_aircraft_load(acp_aircraft *ac, const char *path, char *err, size_t errlen) {
   if (err && errlen > 0) err[0] = '\0';
   if (!ac || !path) {
     if (err && errlen > 0) snprintf(err, errlen, "no aircraft or no path (NULL)");
     return ACP_ERR_INVALID;
   }
-  FILE *f = fopen(path, "rb");
+  int not_regular;
+  FILE *f = open_regular(path, &not_regular);
   if (!f) {
-    if (err && errlen > 0) snprintf(err, errlen, "cannot open '%s' for reading", path);
+    if (err && errlen > 0)
+      snprintf(err, errlen, not_regular ? "'%s' is not a regular file" : "cannot open '%s' for reading",
+               path);
     return ACP_ERR_IO;
   }
   parser p;

@@ -173,7 +173,9 @@ ACP_API int acp_aircraft_parse(acp_aircraft *ac, const char *text, char *err, si
  * is a parse error. No memory is allocated.
  *
  * @return as acp_aircraft_parse(), and ACP_ERR_IO when the file cannot be
- *         opened or read (err says which).
+ *         opened or read, or is not a regular file (a FIFO, a device or a
+ *         directory is refused without reading from it, so a FIFO without a
+ *         writer does not block); err says which.
  */
 ACP_API int acp_aircraft_load(acp_aircraft *ac, const char *path, char *err, size_t errlen);
 
