@@ -100,6 +100,30 @@ static void msg(char *err, size_t errlen, const char *fmt, ...) {
   va_end(ap);
 }
 
+/* A number for a message with `digits` significant digits and '.' as the
+   decimal point whatever the locale: printf's %g writes the locale's decimal
+   point (a ',' under de_DE; in some locales more than one byte), which is
+   the one run of bytes that are not ASCII letters, digits or a sign. */
+typedef struct {
+  char s[40];
+} number_text;
+
+static number_text number(double v, int digits) {
+  char raw[sizeof(number_text)];
+  number_text t;
+  snprintf(raw, sizeof raw, "%.*g", digits, v);
+  size_t j = 0;
+  for (size_t i = 0; raw[i] && j + 1 < sizeof t.s; ++i) {
+    const char c = raw[i];
+    if ((c >= '0' && c <= '9') || (c >= 'a' && c <= 'z') || c == '-' || c == '+')
+      t.s[j++] = c;
+    else if (j == 0 || t.s[j - 1] != '.')
+      t.s[j++] = '.';
+  }
+  t.s[j] = '\0';
+  return t;
+}
+
 static void copy_text(char *dst, size_t len, const char *src) {
   if (!dst || len == 0) return;
   size_t n = strlen(src);
@@ -200,12 +224,13 @@ static int check_value(const ac_keydef *d, const char *key, double value, char *
     return ACP_ERR_INVALID;
   }
   if ((d->flags & KF_INTEGER) && value != floor(value)) {
-    msg(err, errlen, "key '%s': %.15g is not a whole number", key, value);
+    msg(err, errlen, "key '%s': %s is not a whole number", key, number(value, 15).s);
     return ACP_ERR_INVALID;
   }
   if (!acp_in_range(value, d->lo, d->hi)) {
-    msg(err, errlen, "key '%s': %.15g%s%s is outside the valid range %.15g to %.15g%s%s", key,
-        value, *d->unit ? " " : "", d->unit, d->lo, d->hi, *d->unit ? " " : "", d->unit);
+    msg(err, errlen, "key '%s': %s%s%s is outside the valid range %s to %s%s%s", key,
+        number(value, 15).s, *d->unit ? " " : "", d->unit, number(d->lo, 15).s,
+        number(d->hi, 15).s, *d->unit ? " " : "", d->unit);
     return ACP_ERR_RANGE;
   }
   return ACP_OK;
@@ -519,14 +544,14 @@ int ac_check(const acp_aircraft *ac, char *err, size_t errlen) {
   }
   const double ar = ac->v[AK_SPAN] * ac->v[AK_SPAN] / ac->v[AK_WING_AREA];
   if (!acp_in_range(ar, 0.5, 50.0)) {
-    msg(err, errlen, "aspect ratio span^2/wing_area = %.6g is outside 0.5 to 50", ar);
+    msg(err, errlen, "aspect ratio span^2/wing_area = %s is outside 0.5 to 50", number(ar, 6).s);
     return ACP_ERR_INVALID;
   }
   /* Without 'oswald' the polar uses the estimate, which covers aspect ratios
      1 to 30 only: outside, k would be NaN behind an ACP_OK. */
   if (isnan(ac->v[AK_OSWALD]) && isnan(acp_oswald_estimate(ar, ac_value(ac, AK_SWEEP_LE)))) {
-    msg(err, errlen, "aspect ratio %.6g is outside the Oswald estimate's 1 to 30: give 'oswald'",
-        ar);
+    msg(err, errlen, "aspect ratio %s is outside the Oswald estimate's 1 to 30: give 'oswald'",
+        number(ar, 6).s);
     return ACP_ERR_INVALID;
   }
   if (2.0 * ac->v[AK_WINGLET_HEIGHT] > ac->v[AK_SPAN]) {

@@ -1,6 +1,15 @@
 /* The aircraft text format: a strict subset of TOML 1.0 (docs/aircraft-format.md).
    Line by line, no allocation: the model is built in a copy on the stack and
    replaces the caller's only when the whole text is good. */
+#if defined(__unix__) || defined(__APPLE__)
+#define _POSIX_C_SOURCE 200809L /* open, fstat, fcntl, fdopen */
+#define ACP_POSIX_FILES 1
+#include <fcntl.h>
+#include <sys/stat.h>
+#include <unistd.h>
+#elif defined(_WIN32)
+#include <sys/stat.h>
+#endif
 #include <locale.h>
 #include <stdarg.h>
 #include <stdio.h>
@@ -12,7 +21,8 @@
 #include "aircraft_internal.h"
 #include "internal.h"
 
-#define NUMBER_MAX 64 /* longest number token accepted */
+#define NUMBER_MAX 64   /* longest number token accepted */
+#define MESSAGE_MAX 256 /* a model message (ac_set, ac_check) in full: at most about 170 bytes */
 
 typedef struct {
   acp_aircraft ac;        /* the model being built */
@@ -24,15 +34,45 @@ typedef struct {
   size_t errlen;
 } parser;
 
+/* Cut s after its last complete UTF-8 sequence: a message cut to the
+   caller's buffer must not end inside a character (the text's own UTF-8,
+   a name or a type, is valid: parse_line() checks it). */
+static void utf8_cut(char *s) {
+  size_t n = strlen(s), k = n;
+  while (k > 0 && n - k < 3 && ((unsigned char)s[k - 1] & 0xC0) == 0x80) --k;
+  if (k == 0) return;
+  const unsigned char lead = (unsigned char)s[k - 1];
+  const size_t len = lead >= 0xF0 ? 4 : lead >= 0xE0 ? 3 : lead >= 0xC0 ? 2 : 1;
+  if (n - (k - 1) < len) s[k - 1] = '\0';
+}
+
 static int fail(parser *p, unsigned line, const char *fmt, ...) {
   va_list ap;
   va_start(ap, fmt);
   if (p->err && p->errlen > 0) {
     const int n = line ? snprintf(p->err, p->errlen, "line %u: ", line) : 0;
     if (n >= 0 && (size_t)n < p->errlen) vsnprintf(p->err + n, p->errlen - (size_t)n, fmt, ap);
+    utf8_cut(p->err);
   }
   va_end(ap);
   return ACP_ERR_PARSE;
+}
+
+/* A character of the text for a message, never a raw byte above 0x7F (which
+   alone is not UTF-8): "'x'" or "non-ASCII byte 0xC3". Control characters
+   never get here (parse_line() refuses them first). */
+typedef struct {
+  char s[24];
+} char_name;
+
+static char_name name_char(char c) {
+  char_name d;
+  const unsigned char u = (unsigned char)c;
+  if (u >= 0x80)
+    snprintf(d.s, sizeof d.s, "non-ASCII byte 0x%02X", (unsigned)u);
+  else
+    snprintf(d.s, sizeof d.s, "character '%c'", c);
+  return d;
 }
 
 static int is_ws(char c) { return c == ' ' || c == '\t'; }
@@ -68,6 +108,7 @@ static const char *parse_number(const char *s, size_t n, double *out) {
   while (i < n && is_digit(s[i])) ++i;
   if (i == int_start) return "not a number";
   if (s[int_start] == '0' && i - int_start > 1) return "leading zeros are not allowed";
+  const int integer = i == n; /* a TOML integer: -0 is 0, as tomllib reads it */
   if (i < n && s[i] == '.') {
     const size_t frac_start = ++i;
     while (i < n && is_digit(s[i])) ++i;
@@ -91,6 +132,7 @@ static const char *parse_number(const char *s, size_t n, double *out) {
   *out = strtod(buf, &end);
   if (end != buf + n) return "not a number";
   if (!isfinite(*out)) return "number out of the range of a double";
+  if (integer && *out == 0.0) *out = 0.0;
   return NULL;
 }
 
@@ -108,7 +150,7 @@ static int header(parser *p, const char *s, size_t n, unsigned line) {
     while (i < n && is_bare(s[i])) ++i;
     if (i == start) {
       if (i >= n) return fail(p, line, "unterminated table header (missing ']')");
-      return fail(p, line, "invalid character '%c' in table header", s[i]);
+      return fail(p, line, "invalid %s in table header", name_char(s[i]).s);
     }
     if (nseg < 3) {
       seg[nseg] = s + start;
@@ -122,7 +164,8 @@ static int header(parser *p, const char *s, size_t n, unsigned line) {
     }
     break;
   }
-  if (i >= n || s[i] != ']') return fail(p, line, "unterminated table header (missing ']')");
+  if (i >= n) return fail(p, line, "unterminated table header (missing ']')");
+  if (s[i] != ']') return fail(p, line, "invalid %s in table header", name_char(s[i]).s);
   if (!rest_ok(s, i + 1, n)) return fail(p, line, "unexpected text after the table header");
   if (nseg != 2 || seglen[0] != 9 || memcmp(seg[0], "component", 9) != 0)
     return fail(p, line, "unknown table: the only tables are [component.NAME]");
@@ -140,7 +183,7 @@ static int header(parser *p, const char *s, size_t n, unsigned line) {
 
 /* Store key = value; text is the string value or NULL for a number. */
 static int assign(parser *p, const char *key, const char *text, double number, unsigned line) {
-  char full[96], why[160];
+  char full[96], why[MESSAGE_MAX];
   unsigned *first = NULL;
   const char *table = p->cur ? p->cur->name : NULL;
   if (!p->cur) {
@@ -184,11 +227,14 @@ static int key_value(parser *p, const char *s, size_t n, unsigned line) {
   if (s[0] == '"' || s[0] == '\'') return fail(p, line, "quoted keys are not supported");
   size_t i = 0;
   while (i < n && is_bare(s[i])) ++i;
-  if (i == 0) return fail(p, line, "invalid character '%c' at the start of a key", s[0]);
+  if (i == 0) return fail(p, line, "invalid %s at the start of a key", name_char(s[0]).s);
   char key[48];
   if (i >= sizeof key) return fail(p, line, "key too long");
   memcpy(key, s, i);
   key[i] = '\0';
+  if (i < n && !is_ws(s[i]) && s[i] != '=' && s[i] != '.')
+    return fail(p, line, "invalid %s in a key, after '%s' (keys are ASCII letters, digits, '_' "
+                         "and '-')", name_char(s[i]).s, key);
   i = skip_ws(s, i, n);
   if (i < n && s[i] == '.')
     return fail(p, line, "dotted keys are not supported; use a [component.NAME] table");
@@ -255,11 +301,16 @@ static size_t utf8_length(const unsigned char *s, size_t n) {
   return len;
 }
 
-/* One line, without its line ending. */
-static int parse_line(parser *p, const char *s, size_t n, unsigned line) {
-  if (n > 0 && s[n - 1] == '\r') --n; /* CRLF */
+/* One line, without its line feed; lf: it had one (a CR before it is a CRLF
+   line end, a CR at the end of the text is not: TOML and tomllib refuse it). */
+static int parse_line(parser *p, const char *s, size_t n, unsigned line, int lf) {
+  if (lf && n > 0 && s[n - 1] == '\r') --n; /* CRLF */
+  if (line == 1 && n >= 3 && memcmp(s, "\xEF\xBB\xBF", 3) == 0)
+    return fail(p, line, "byte order mark (U+FEFF) at the start of the text is not allowed");
   for (size_t k = 0; k < n; ++k) {
     const unsigned char ch = (unsigned char)s[k];
+    if (ch == '\r')
+      return fail(p, line, "control character (code 13, a CR without a LF after it) not allowed");
     if ((ch < 0x20 && ch != '\t') || ch == 0x7f)
       return fail(p, line, "control character (code %u) not allowed", (unsigned)ch);
     if (ch >= 0x80) {
@@ -283,7 +334,7 @@ static void parser_begin(parser *p, char *err, size_t errlen) {
 }
 
 static int parser_end(parser *p, acp_aircraft *ac) {
-  char why[200];
+  char why[MESSAGE_MAX];
   if (ac_check(&p->ac, why, sizeof why) != ACP_OK)
     return fail(p, 0, "incomplete aircraft at the end of the text: %s", why);
   memcpy(ac, &p->ac, sizeof *ac);
@@ -305,12 +356,45 @@ int acp_aircraft_parse(acp_aircraft *ac, const char *text, char *err, size_t err
     const char *nl = strchr(s, '\n');
     const size_t n = nl ? (size_t)(nl - s) : strlen(s);
     ++line;
-    const int st = parse_line(&p, s, n, line);
+    const int st = parse_line(&p, s, n, line, nl != NULL);
     if (st != ACP_OK) return st;
     if (!nl) break;
     s = nl + 1;
   }
   return parser_end(&p, ac);
+}
+
+/* fopen(path, "rb") of a regular file only: anything else (a FIFO, which
+   blocks in open() or read() until a writer comes, a device, a directory) is
+   refused; *not_regular tells which failure it was. */
+static FILE *open_regular(const char *path, int *not_regular) {
+  *not_regular = 0;
+#ifdef ACP_POSIX_FILES
+  const int fd = open(path, O_RDONLY | O_NONBLOCK | O_CLOEXEC); /* a FIFO opens at once */
+  if (fd < 0) return NULL;
+  struct stat st;
+  FILE *f = NULL;
+  if (fstat(fd, &st) == 0) {
+    const int flags = fcntl(fd, F_GETFL);
+    if (!S_ISREG(st.st_mode))
+      *not_regular = 1;
+    else if (flags >= 0 && fcntl(fd, F_SETFL, flags & ~O_NONBLOCK) == 0)
+      f = fdopen(fd, "rb");
+  }
+  if (!f) close(fd);
+  return f;
+#else
+  FILE *f = fopen(path, "rb");
+#ifdef _WIN32
+  struct _stat st;
+  if (f && (_fstat(_fileno(f), &st) != 0 || (st.st_mode & _S_IFMT) != _S_IFREG)) {
+    *not_regular = 1;
+    fclose(f);
+    return NULL;
+  }
+#endif
+  return f;
+#endif
 }
 
 int acp_aircraft_load(acp_aircraft *ac, const char *path, char *err, size_t errlen) {
@@ -319,9 +403,12 @@ int acp_aircraft_load(acp_aircraft *ac, const char *path, char *err, size_t errl
     if (err && errlen > 0) snprintf(err, errlen, "no aircraft or no path (NULL)");
     return ACP_ERR_INVALID;
   }
-  FILE *f = fopen(path, "rb");
+  int not_regular;
+  FILE *f = open_regular(path, &not_regular);
   if (!f) {
-    if (err && errlen > 0) snprintf(err, errlen, "cannot open '%s' for reading", path);
+    if (err && errlen > 0)
+      snprintf(err, errlen, not_regular ? "'%s' is not a regular file" : "cannot open '%s' for reading",
+               path);
     return ACP_ERR_IO;
   }
   parser p;
@@ -347,7 +434,7 @@ int acp_aircraft_load(acp_aircraft *ac, const char *path, char *err, size_t errl
       if (err && errlen > 0) snprintf(err, errlen, "read error in '%s'", path);
       st = ACP_ERR_IO;
     }
-    if (st == ACP_OK) st = parse_line(&p, buf, n, line);
+    if (st == ACP_OK) st = parse_line(&p, buf, n, line, ch == '\n');
   }
   fclose(f);
   if (st != ACP_OK) return st;

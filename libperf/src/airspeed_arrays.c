@@ -5,6 +5,8 @@
    to the scalar function, so results and errors are those of the scalar path. */
 #include "acperf/airspeed.h"
 
+#include <string.h>
+
 #include "acperf/atmosphere.h"
 #include "atmosphere_layers.h"
 #include "internal.h"
@@ -102,28 +104,26 @@ static void from_mach(quantity q, size_t n, const double *mach, const double *t,
 typedef double (*scalar_form)(double value, double hp, double dtemp);
 
 /* Blocks of points: atmosphere, input -> Mach, Mach -> output, then the scalar
-   function for every point the closed forms left as NaN. */
+   function for every point the closed forms left as NaN. A block's results are
+   made on the stack and copied out last, so the output may be one of the inputs
+   (in place, acperf.h): the scalar fallback still reads the caller's input. */
 static size_t convert(size_t n, const double *in, const double *hp, const double *dtemp,
                       double *out, quantity from, quantity to, scalar_form scalar) {
-  double t[ACP_BLOCK], p[ACP_BLOCK], m[ACP_BLOCK], tmp[ACP_BLOCK] = {0.0};
+  if (!in || !hp) return acp_all_invalid(n, &out, 1);
+  double t[ACP_BLOCK], p[ACP_BLOCK], m[ACP_BLOCK], res[ACP_BLOCK];
   size_t bad = 0;
   for (size_t i = 0; i < n; i += ACP_BLOCK) {
     const size_t len = block_length(n, i);
-    double *dst = out ? out + i : tmp;
-    if (!in || !hp) {
-      for (size_t j = 0; j < len; ++j) dst[j] = ACP_NAN;
-      bad += len;
-      continue;
-    }
     const double *dt = dtemp ? dtemp + i : NULL;
     atm_block(len, hp + i, dt, t, p);
     to_mach(from, len, in + i, t, p, m);
-    from_mach(to, len, m, t, p, dst);
+    from_mach(to, len, m, t, p, res);
     for (size_t j = 0; j < len; ++j) {
-      if (isnan(dst[j]) && !isnan(p[j]) && !isnan(in[i + j]))
-        dst[j] = scalar(in[i + j], hp[i + j], dt ? dt[j] : 0.0);
-      bad += isnan(dst[j]) ? 1u : 0u;
+      if (isnan(res[j]) && !isnan(p[j]) && !isnan(in[i + j]))
+        res[j] = scalar(in[i + j], hp[i + j], dt ? dt[j] : 0.0);
+      bad += isnan(res[j]) ? 1u : 0u;
     }
+    if (out) memcpy(out + i, res, len * sizeof res[0]);
   }
   return bad;
 }

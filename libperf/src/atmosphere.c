@@ -173,16 +173,18 @@ static void atm_outputs(size_t n, const double *t, const double *p, double *dens
 size_t acp_isa_n(size_t n, const double *hp, const double *dtemp, double *temperature,
                  double *pressure, double *density, double *sound_speed,
                  double *dynamic_viscosity, double *kinematic_viscosity) {
+  if (!hp) {
+    double *const outs[] = {temperature,       pressure,           density, sound_speed,
+                            dynamic_viscosity, kinematic_viscosity};
+    return acp_all_invalid(n, outs, 6);
+  }
   double t[ACP_BLOCK], p[ACP_BLOCK];
   size_t bad = 0;
+  /* a block's inputs are read (into t and p) before any of its outputs is
+     written: an output may be hp or dtemp itself */
   for (size_t i = 0; i < n; i += ACP_BLOCK) {
     const size_t m = block_length(n, i);
-    if (hp) {
-      bad += atm_block(m, hp + i, dtemp ? dtemp + i : NULL, t, p);
-    } else {
-      for (size_t j = 0; j < m; ++j) t[j] = p[j] = ACP_NAN;
-      bad += m;
-    }
+    bad += atm_block(m, hp + i, dtemp ? dtemp + i : NULL, t, p);
     if (temperature) memcpy(temperature + i, t, m * sizeof t[0]);
     if (pressure) memcpy(pressure + i, p, m * sizeof p[0]);
     atm_outputs(m, t, p, density ? density + i : NULL, sound_speed ? sound_speed + i : NULL,
@@ -238,10 +240,11 @@ int acp_isa_pressure_altitude(double pressure, double *hp) {
 }
 
 size_t acp_isa_pressure_altitude_n(size_t n, const double *pressure, double *hp) {
+  if (!pressure) return acp_all_invalid(n, &hp, 1);
   size_t bad = 0;
   for (size_t i = 0; i < n; ++i) {
     double h = ACP_NAN;
-    if (!pressure || acp_isa_pressure_altitude(pressure[i], &h) != ACP_OK) ++bad;
+    if (acp_isa_pressure_altitude(pressure[i], &h) != ACP_OK) ++bad;
     acp_put(hp ? &hp[i] : NULL, h);
   }
   return bad;
@@ -263,9 +266,10 @@ double acp_geometric_altitude(double geopotential) {
 }
 
 size_t acp_geopotential_altitude_n(size_t n, const double *geometric, double *geopotential) {
+  if (!geometric) return acp_all_invalid(n, &geopotential, 1);
   size_t bad = 0;
   for (size_t i = 0; i < n; ++i) {
-    const double h = geometric ? acp_geopotential_altitude(geometric[i]) : ACP_NAN;
+    const double h = acp_geopotential_altitude(geometric[i]);
     bad += isnan(h) ? 1u : 0u;
     acp_put(geopotential ? &geopotential[i] : NULL, h);
   }
@@ -273,9 +277,10 @@ size_t acp_geopotential_altitude_n(size_t n, const double *geometric, double *ge
 }
 
 size_t acp_geometric_altitude_n(size_t n, const double *geopotential, double *geometric) {
+  if (!geopotential) return acp_all_invalid(n, &geometric, 1);
   size_t bad = 0;
   for (size_t i = 0; i < n; ++i) {
-    const double z = geopotential ? acp_geometric_altitude(geopotential[i]) : ACP_NAN;
+    const double z = acp_geometric_altitude(geopotential[i]);
     bad += isnan(z) ? 1u : 0u;
     acp_put(geometric ? &geometric[i] : NULL, z);
   }

@@ -615,14 +615,12 @@ size_t acp_climb_table(const acp_aircraft *ac, double hp_start, double wind, dou
                        size_t n_mass, const double *mass, size_t n_hp, const double *hp_end,
                        size_t n_dtemp, const double *dtemp, double *table_time,
                        double *table_distance, double *table_fuel) {
-  const size_t cells = n_mass * n_hp * n_dtemp;
-  for (size_t i = 0; i < cells; ++i) {
-    table_put(table_time, i, ACP_NAN);
-    table_put(table_distance, i, ACP_NAN);
-    table_put(table_fuel, i, ACP_NAN);
-  }
-  if (!ac || !mass || !hp_end || !dtemp || (n_mass && cells / n_mass != n_hp * n_dtemp))
-    return cells;
+  /* the cell count in two steps: n_hp n_dtemp can overflow on its own */
+  if ((n_hp && n_dtemp > SIZE_MAX / n_hp) || (n_mass && n_hp * n_dtemp > SIZE_MAX / n_mass))
+    return SIZE_MAX;
+  double *const outs[] = {table_time, table_distance, table_fuel};
+  const size_t cells = acp_all_invalid(n_mass * n_hp * n_dtemp, outs, 3);
+  if (!ac || !mass || !hp_end || !dtemp) return cells;
   for (size_t j = 0; j < n_hp; ++j)
     if (!(hp_end[j] > hp_start) || (j > 0 && !(hp_end[j] > hp_end[j - 1]))) return cells;
   size_t filled = 0;

@@ -433,11 +433,14 @@ int acp_cruise_speed(const acp_aircraft *ac, int mode, double cost_index, double
 size_t acp_cruise_speed_n(const acp_aircraft *ac, int mode, double cost_index, size_t n,
                           const double *mass, const double *hp, const double *dtemp,
                           const double *wind, double *tas, double *mach, double *sar) {
+  if (!ac || !mass || !hp) {
+    double *const outs[] = {tas, mach, sar};
+    return acp_all_invalid(n, outs, 3);
+  }
   size_t bad = 0;
   for (size_t i = 0; i < n; ++i) {
     acp_cruise_point p;
-    if (!mass || !hp ||
-        acp_cruise_speed(ac, mode, cost_index, mass[i], hp[i], acp_opt(dtemp, i, 0.0),
+    if (acp_cruise_speed(ac, mode, cost_index, mass[i], hp[i], acp_opt(dtemp, i, 0.0),
                          acp_opt(wind, i, 0.0), &p) != ACP_OK) {
       cruise_point_nan(&p);
       ++bad;
@@ -469,11 +472,11 @@ int acp_specific_air_range(const acp_aircraft *ac, double mass, double hp, doubl
 size_t acp_specific_air_range_n(const acp_aircraft *ac, size_t n, const double *mass,
                                 const double *hp, const double *dtemp, const double *tas,
                                 const double *wind, double *sar) {
+  if (!ac || !mass || !hp || !tas) return acp_all_invalid(n, &sar, 1);
   size_t bad = 0;
   for (size_t i = 0; i < n; ++i) {
     double s = ACP_NAN;
-    if (!mass || !hp || !tas ||
-        acp_specific_air_range(ac, mass[i], hp[i], acp_opt(dtemp, i, 0.0), tas[i],
+    if (acp_specific_air_range(ac, mass[i], hp[i], acp_opt(dtemp, i, 0.0), tas[i],
                                acp_opt(wind, i, 0.0), &s) != ACP_OK)
       ++bad;
     acp_put(sar ? &sar[i] : NULL, s);

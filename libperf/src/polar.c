@@ -346,15 +346,15 @@ size_t acp_drag_n(const acp_aircraft *ac, size_t n, const double *mass, const do
                   const double *dtemp, const double *tas, const double *load_factor,
                   double *friction, double *form, double *interference, double *parasite,
                   double *induced, double *wave, double *total) {
+  if (!ac || !mass || !hp || !tas) {
+    double *const outs[] = {friction, form, interference, parasite, induced, wave, total};
+    return acp_all_invalid(n, outs, 7);
+  }
   size_t bad = 0;
   for (size_t i = 0; i < n; ++i) {
     acp_drag_parts dp;
-    int st = ACP_ERR_INVALID;
-    if (mass && hp && tas)
-      st = acp_drag_load(ac, mass[i], hp[i], acp_opt(dtemp, i, 0.0), tas[i],
-                         acp_opt(load_factor, i, 1.0), &dp);
-    else
-      parts_nan(&dp);
+    const int st = acp_drag_load(ac, mass[i], hp[i], acp_opt(dtemp, i, 0.0), tas[i],
+                                 acp_opt(load_factor, i, 1.0), &dp);
     if (st != ACP_OK) ++bad;
     put_parts(i, &dp, friction, form, interference, parasite, induced, wave, total);
   }
@@ -364,15 +364,14 @@ size_t acp_drag_n(const acp_aircraft *ac, size_t n, const double *mass, const do
 size_t acp_drag_curve(const acp_aircraft *ac, double mass, double hp, double dtemp, size_t n,
                       const double *tas, double *parasite, double *induced, double *wave,
                       double *total) {
+  if (!ac || !tas) {
+    double *const outs[] = {parasite, induced, wave, total};
+    return acp_all_invalid(n, outs, 4);
+  }
   size_t bad = 0;
   for (size_t i = 0; i < n; ++i) {
     acp_drag_parts dp;
-    int st = ACP_ERR_INVALID;
-    if (tas)
-      st = acp_drag(ac, mass, hp, dtemp, tas[i], &dp);
-    else
-      parts_nan(&dp);
-    if (st != ACP_OK) ++bad;
+    if (acp_drag(ac, mass, hp, dtemp, tas[i], &dp) != ACP_OK) ++bad;
     put_parts(i, &dp, NULL, NULL, NULL, parasite, induced, wave, total);
   }
   return bad;

@@ -167,16 +167,16 @@ int acp_speeds_mach(const acp_aircraft *ac, double mass, double hp, double dtemp
 static size_t speeds_array(int kind, const acp_aircraft *ac, size_t n, const double *mass,
                            const double *hp, const double *dtemp, double *vmd, double *vmp,
                            double *vmr, double *vs1g, double *ld_max) {
+  if (!ac || !mass || !hp) {
+    double *const outs[] = {vmd, vmp, vmr, vs1g, ld_max};
+    return acp_all_invalid(n, outs, 5);
+  }
   size_t bad = 0;
   for (size_t i = 0; i < n; ++i) {
     acp_speed_set v;
-    int st = ACP_ERR_INVALID;
-    speeds_nan(&v);
-    if (mass && hp) {
-      const double dt = acp_opt(dtemp, i, 0.0);
-      st = acp_speeds(ac, mass[i], hp[i], dt, &v);
-      if (kind) convert(&v, hp[i], dt, kind);
-    }
+    const double dt = acp_opt(dtemp, i, 0.0);
+    const int st = acp_speeds(ac, mass[i], hp[i], dt, &v);
+    if (kind) convert(&v, hp[i], dt, kind);
     if (st != ACP_OK) ++bad;
     acp_put(vmd ? vmd + i : NULL, v.vmd);
     acp_put(vmp ? vmp + i : NULL, v.vmp);
@@ -246,13 +246,15 @@ int acp_glide(const acp_aircraft *ac, double mass, double hp, double dtemp, acp_
 size_t acp_glide_n(const acp_aircraft *ac, size_t n, const double *mass, const double *hp,
                    const double *dtemp, double *best_glide_ratio, double *best_glide_speed,
                    double *best_glide_sink_rate, double *min_sink_speed, double *min_sink_rate) {
+  if (!ac || !mass || !hp) {
+    double *const outs[] = {best_glide_ratio, best_glide_speed, best_glide_sink_rate,
+                            min_sink_speed, min_sink_rate};
+    return acp_all_invalid(n, outs, 5);
+  }
   size_t bad = 0;
   for (size_t i = 0; i < n; ++i) {
     acp_glide_set g;
-    int st = ACP_ERR_INVALID;
-    glide_nan(&g);
-    if (mass && hp) st = acp_glide(ac, mass[i], hp[i], acp_opt(dtemp, i, 0.0), &g);
-    if (st != ACP_OK) ++bad;
+    if (acp_glide(ac, mass[i], hp[i], acp_opt(dtemp, i, 0.0), &g) != ACP_OK) ++bad;
     acp_put(best_glide_ratio ? best_glide_ratio + i : NULL, g.best_glide_ratio);
     acp_put(best_glide_speed ? best_glide_speed + i : NULL, g.best_glide_speed);
     acp_put(best_glide_sink_rate ? best_glide_sink_rate + i : NULL, g.best_glide_sink_rate);
@@ -283,13 +285,15 @@ int acp_speed_stability(const acp_aircraft *ac, double mass, double hp, double d
 size_t acp_speed_stability_n(const acp_aircraft *ac, size_t n, const double *mass,
                              const double *hp, const double *dtemp, const double *tas,
                              double *slope, double *vmd, double *stable) {
+  if (!ac || !mass || !hp || !tas) {
+    double *const outs[] = {slope, vmd, stable};
+    return acp_all_invalid(n, outs, 3);
+  }
   size_t bad = 0;
   for (size_t i = 0; i < n; ++i) {
-    acp_stability r = {ACP_NAN, ACP_NAN, ACP_NAN};
-    int st = ACP_ERR_INVALID;
-    if (mass && hp && tas)
-      st = acp_speed_stability(ac, mass[i], hp[i], acp_opt(dtemp, i, 0.0), tas[i], &r);
-    if (st != ACP_OK) ++bad;
+    acp_stability r;
+    if (acp_speed_stability(ac, mass[i], hp[i], acp_opt(dtemp, i, 0.0), tas[i], &r) != ACP_OK)
+      ++bad;
     acp_put(slope ? slope + i : NULL, r.slope);
     acp_put(vmd ? vmd + i : NULL, r.vmd);
     acp_put(stable ? stable + i : NULL, r.stable);
@@ -300,19 +304,20 @@ size_t acp_speed_stability_n(const acp_aircraft *ac, size_t n, const double *mas
 size_t acp_speed_stability_boundary_n(const acp_aircraft *ac, size_t n, const double *mass,
                                       const double *hp, const double *dtemp, double *vmd_tas,
                                       double *vmd_cas, double *vmd_mach) {
+  if (!ac || !mass || !hp) {
+    double *const outs[] = {vmd_tas, vmd_cas, vmd_mach};
+    return acp_all_invalid(n, outs, 3);
+  }
   size_t bad = 0;
   for (size_t i = 0; i < n; ++i) {
     double v = ACP_NAN, cas = ACP_NAN, mach = ACP_NAN;
-    int st = ACP_ERR_INVALID;
-    if (mass && hp) {
-      search s;
-      const double dt = acp_opt(dtemp, i, 0.0);
-      st = setup(&s, ac, mass[i], hp[i], dt);
-      if (st == ACP_OK) st = minimise(&s, OBJ_DRAG, NULL, &v);
-      if (st == ACP_OK) {
-        cas = acp_tas_to_cas(v, hp[i], dt);
-        mach = acp_tas_to_mach(v, hp[i], dt);
-      }
+    search s;
+    const double dt = acp_opt(dtemp, i, 0.0);
+    int st = setup(&s, ac, mass[i], hp[i], dt);
+    if (st == ACP_OK) st = minimise(&s, OBJ_DRAG, NULL, &v);
+    if (st == ACP_OK) {
+      cas = acp_tas_to_cas(v, hp[i], dt);
+      mach = acp_tas_to_mach(v, hp[i], dt);
     }
     if (st != ACP_OK) ++bad;
     acp_put(vmd_tas ? vmd_tas + i : NULL, v);

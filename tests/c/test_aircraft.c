@@ -2,11 +2,14 @@
    file and bad argument gives a clear error, with the line for the parser.
    The format is a subset of TOML 1.0 (toml.io/en/v1.0.0); the examples are
    also read with Python's tomllib by tests/python/ref_aircraft_toml.py. */
-#define _POSIX_C_SOURCE 200809L /* mkstemp, for the acp_aircraft_load() files */
+#define _POSIX_C_SOURCE 200809L /* mkstemp, mkdtemp, mkfifo, alarm: the acp_aircraft_load() files */
 #include "check.h"
+#include "utf8.h"
 
+#include <locale.h>
 #include <stdlib.h>
 #include <string.h>
+#include <sys/stat.h>
 #include <unistd.h>
 
 #include <acperf.h>
@@ -344,6 +347,19 @@ static void test_parse_errors(void **state) {
        "belong to a component build-up"},
       {"wing_area = 1\nspan = 100\ncd0 = 0.02\n", 0, "aspect ratio"},
       {"wing_area = 30\nspan = 15\ncd0 = 0.02\nwinglet_height = 8\n", 0, "more than half the span"},
+      /* tomllib refuses a CR that no LF follows, also at the very end */
+      {"wing_area = 30\nspan = 15\ncd0 = 0.02\r", 3, "a CR without a LF"},
+      {"wing_area = 30\r\r\n", 1, "a CR without a LF"},
+      /* tomllib refuses a byte order mark ("Invalid statement"); a non-ASCII
+         byte is named in hex, never copied raw into the message */
+      {"\xEF\xBB\xBFwing_area = 30\n", 1, "byte order mark (U+FEFF) at the start"},
+      {"\xEF\xBB\xBF# comment\n", 1, "byte order mark"},
+      {"w\xC3\xADng_area = 30\n", 1, "non-ASCII byte 0xC3 in a key, after 'w'"},
+      {"\xC3\xA9 = 1\n", 1, "non-ASCII byte 0xC3 at the start of a key"},
+      {"span$ = 1\n", 1, "invalid character '$' in a key, after 'span'"},
+      {"[component.w\xC3\xADng]\n", 1, "invalid non-ASCII byte 0xC3 in table header"},
+      {"[\xC3\xA9]\n", 1, "invalid non-ASCII byte 0xC3 in table header"},
+      {"[component.w;]\n", 1, "invalid character ';' in table header"},
   };
   acp_aircraft *ac = acp_aircraft_new();
   char err[256];
@@ -360,6 +376,8 @@ static void test_parse_errors(void **state) {
     assert_int_equal(st, ACP_ERR_PARSE);
     assert_true(strncmp(err, prefix, strlen(prefix)) == 0);
     assert_non_null(strstr(err, rows[i].words));
+    assert_true(utf8_valid(err));
+    assert_null(strstr(err, "expected '=' after key 'w'"));
     /* the model is unchanged by a failed parse */
     double v;
     assert_int_equal(acp_aircraft_get(ac, "cd0", &v), ACP_OK);
@@ -378,6 +396,95 @@ static void test_parse_errors(void **state) {
   assert_string_equal(small, "line 1:");
   assert_int_equal(acp_aircraft_parse(ac, NULL, err, sizeof err), ACP_ERR_INVALID);
   assert_int_equal(acp_aircraft_parse(NULL, MIN, err, sizeof err), ACP_ERR_INVALID);
+  acp_aircraft_free(ac);
+}
+
+static void write_temp(char *path, const char *text, size_t len);
+
+/* LC_NUMERIC set to de_DE.UTF-8, from the system or from the build tree
+   (tests/CMakeLists.txt makes it there with localedef); 0 when neither has it. */
+static int german_numbers(void) {
+  if (setlocale(LC_NUMERIC, "de_DE.UTF-8")) return 1;
+  if (setenv("LOCPATH", ACP_TEST_LOCALE_DIR, 1) != 0) return 0;
+  return setlocale(LC_NUMERIC, "de_DE.UTF-8") != NULL;
+}
+
+/* Where the parser reads as tomllib does, and its messages: valid UTF-8 when
+   cut to any buffer, never cut by an inner buffer, numbers with '.' under
+   any locale. */
+static void test_parse_like_tomllib(void **state) {
+  (void)state;
+  acp_aircraft *ac = acp_aircraft_new();
+  char err[512], text[512];
+  double v;
+  /* tomllib: 'a = -0' gives the integer 0, 'a = -0.0' and 'a = -0e0' the float -0.0 */
+  static const struct {
+    const char *value;
+    int negative;
+  } zeros[] = {{"-0", 0}, {"+0", 0}, {"0", 0}, {"-0.0", 1}, {"-0e0", 1}, {"-0.0e5", 1}};
+  for (size_t i = 0; i < sizeof zeros / sizeof zeros[0]; ++i) {
+    snprintf(text, sizeof text, "%scl_min_drag = %s\n", MIN, zeros[i].value);
+    assert_int_equal(acp_aircraft_parse(ac, text, err, sizeof err), ACP_OK);
+    assert_int_equal(acp_aircraft_get(ac, "cl_min_drag", &v), ACP_OK);
+    if (v != 0.0 || (signbit(v) != 0) != zeros[i].negative)
+      print_error("cl_min_drag = %s read as %g\n", zeros[i].value, v);
+    assert_true(v == 0.0 && (signbit(v) != 0) == zeros[i].negative);
+  }
+  /* the longest component-type message (a 31-byte name, a 63-byte type) in
+     full: it was cut at 160 bytes */
+  snprintf(text, sizeof text, "[component.%s]\ntype = \"%s\"\n",
+           "abcdefghijklmnopqrstuvwxyz01234", /* ACP_COMPONENT_NAME_MAX - 1 */
+           "tttttttttttttttttttttttttttttttttttttttttttttttttttttttttttttt\xC3\xA9");
+  assert_int_equal(acp_aircraft_parse(ac, text, err, sizeof err), ACP_ERR_PARSE);
+  assert_non_null(strstr(err, "is not one of surface, body, nacelle, other"));
+  /* cut to every buffer length: never inside the UTF-8 of the type's last
+     character, and terminated */
+  const size_t full = strlen(err);
+  for (size_t len = 1; len <= full + 1; ++len) {
+    char cut[512];
+    memset(cut, 'X', sizeof cut);
+    assert_int_equal(acp_aircraft_parse(ac, text, cut, len), ACP_ERR_PARSE);
+    assert_true(strlen(cut) < len);
+    if (!utf8_valid(cut)) print_error("errlen %zu: \"%s\"\n", len, cut);
+    assert_true(utf8_valid(cut));
+  }
+  /* messages under a German locale: numbers still with '.' (contract:
+     aircraft.h, locale-independent; the locale's ',' shows it would matter) */
+  const int german = german_numbers();
+  if (!german) {
+    print_message("de_DE.UTF-8 not available (localedef or Debian's `locales` missing): "
+                  "locale check skipped\n");
+  } else {
+    assert_string_equal(localeconv()->decimal_point, ",");
+    assert_int_equal(acp_aircraft_parse(ac, "wing_area = 30\nspan = 1500.5\n", err, sizeof err),
+                     ACP_ERR_PARSE);
+    assert_string_equal(err, "line 2: key 'span': 1500.5 m is outside the valid range 0.3 to 150 m");
+    assert_int_equal(acp_aircraft_parse(ac, "wing_area = 0.5\nspan = 15\ncd0 = 0.02\n", err,
+                                        sizeof err),
+                     ACP_ERR_PARSE);
+    assert_non_null(strstr(err, "span^2/wing_area = 450 is outside 0.5 to 50"));
+    assert_int_equal(acp_aircraft_parse(ac, "[component.w]\ncount = 1.5\n", err, sizeof err),
+                     ACP_ERR_PARSE);
+    assert_non_null(strstr(err, "1.5 is not a whole number"));
+    /* and numbers still read with '.' */
+    assert_int_equal(acp_aircraft_parse(ac, "wing_area = 30.25\nspan = 15\ncd0 = 0.02\n", err,
+                                        sizeof err),
+                     ACP_OK);
+    assert_int_equal(acp_aircraft_get(ac, "wing_area", &v), ACP_OK);
+    CHECK_CLOSE(v, 30.25, 0, 0, "30.25 under de_DE");
+    assert_non_null(setlocale(LC_NUMERIC, "C"));
+  }
+  /* a file ending in a lone CR: refused by load as by parse */
+  char path[64];
+  static const char *const LONE_CR = "wing_area = 30\nspan = 15\ncd0 = 0.02\r";
+  static const char *const CRLF = "wing_area = 30\nspan = 15\ncd0 = 0.02\r\n";
+  write_temp(path, LONE_CR, strlen(LONE_CR));
+  assert_int_equal(acp_aircraft_load(ac, path, err, sizeof err), ACP_ERR_PARSE);
+  assert_non_null(strstr(err, "line 3: control character (code 13, a CR without a LF"));
+  remove(path);
+  write_temp(path, CRLF, strlen(CRLF));
+  assert_int_equal(acp_aircraft_load(ac, path, err, sizeof err), ACP_OK);
+  remove(path);
   acp_aircraft_free(ac);
 }
 
@@ -435,10 +542,39 @@ static void test_load(void **state) {
   assert_non_null(strstr(err, "cannot open"));
   assert_int_equal(acp_aircraft_load(ac, NULL, err, sizeof err), ACP_ERR_INVALID);
   assert_int_equal(acp_aircraft_load(NULL, "x", err, sizeof err), ACP_ERR_INVALID);
-  /* a directory is not a readable aircraft file */
-  const int st = acp_aircraft_load(ac, "/tmp", err, sizeof err);
-  assert_true(st == ACP_ERR_IO || st == ACP_ERR_PARSE);
   acp_aircraft_free(ac);
+}
+
+/* What is not a regular file is refused before anything is read from it
+   (contract: aircraft.h): a FIFO without a writer (POSIX: open() without
+   O_NONBLOCK and read() wait for a writer, so the load blocked for good), a
+   directory, a character device. alarm(): a load that blocks fails the test
+   instead of hanging it. */
+static void test_load_not_regular(void **state) {
+  (void)state;
+#if defined(__unix__) || defined(__APPLE__)
+  acp_aircraft *ac = acp_aircraft_new();
+  char dir[] = "/tmp/acperf_fifo_XXXXXX", fifo[64], err[256];
+  assert_non_null(mkdtemp(dir));
+  snprintf(fifo, sizeof fifo, "%s/aircraft.toml", dir);
+  assert_int_equal(mkfifo(fifo, 0600), 0);
+  alarm(20);
+  const char *const paths[] = {fifo, dir, "/dev/null"};
+  for (size_t i = 0; i < 3; ++i) {
+    err[0] = '\0';
+    const int st = acp_aircraft_load(ac, paths[i], err, sizeof err);
+    if (st != ACP_ERR_IO || !strstr(err, "is not a regular file"))
+      print_error("%s: status %d, \"%s\"\n", paths[i], st, err);
+    assert_int_equal(st, ACP_ERR_IO);
+    assert_non_null(strstr(err, "is not a regular file"));
+  }
+  alarm(0);
+  assert_int_equal(remove(fifo), 0);
+  assert_int_equal(rmdir(dir), 0);
+  acp_aircraft_free(ac);
+#else
+  skip(); /* no FIFOs outside POSIX */
+#endif
 }
 
 /* Fuzz-ish: every prefix of a good file and single-byte corruptions never
@@ -474,7 +610,8 @@ int main(void) {
       cmocka_unit_test(test_model_keys),   cmocka_unit_test(test_key_listing_and_copy),
       cmocka_unit_test(test_changed_model_drags_as_a_fresh_one),
       cmocka_unit_test(test_parse_good),   cmocka_unit_test(test_parse_errors),
-      cmocka_unit_test(test_load),         cmocka_unit_test(test_parse_fuzz),
+      cmocka_unit_test(test_load),         cmocka_unit_test(test_load_not_regular),
+      cmocka_unit_test(test_parse_like_tomllib), cmocka_unit_test(test_parse_fuzz),
   };
   return cmocka_run_group_tests(tests, NULL, NULL);
 }

@@ -12,67 +12,16 @@ import ctypes
 import pathlib
 import tomllib
 
-from reflib import Checker, load
+from reflib import Checker, aircraft_api, flatten, load, model_differences
 
-lib = load()
-lib.acp_aircraft_new.restype = ctypes.c_void_p
-lib.acp_aircraft_free.argtypes = [ctypes.c_void_p]
-for name in ("acp_aircraft_load", "acp_aircraft_parse"):
-    getattr(lib, name).argtypes = [ctypes.c_void_p, ctypes.c_char_p, ctypes.c_char_p,
-                                   ctypes.c_size_t]
-lib.acp_aircraft_get.argtypes = [ctypes.c_void_p, ctypes.c_char_p,
-                                 ctypes.POINTER(ctypes.c_double)]
-lib.acp_aircraft_get_text.argtypes = [ctypes.c_void_p, ctypes.c_char_p, ctypes.c_char_p,
-                                      ctypes.c_size_t]
-lib.acp_aircraft_key_at.argtypes = [ctypes.c_void_p, ctypes.c_size_t, ctypes.c_char_p,
-                                    ctypes.c_size_t]
-
+lib = aircraft_api(load())
 EXAMPLES = pathlib.Path(__file__).resolve().parents[2] / "examples" / "aircraft"
-TEXT_KEYS = {"name"}
 check = Checker("aircraft files: tomllib vs the C parser")
 
 
-def flatten(doc):
-    """tomllib's nested tables as the C library's key names."""
-    flat = {}
-    for key, value in doc.items():
-        if key == "component":
-            for comp, table in value.items():
-                for field, v in table.items():
-                    flat[f"component.{comp}.{field}"] = v
-        else:
-            flat[key] = value
-    return flat
-
-
-def c_keys(ac):
-    keys, buf, i = set(), ctypes.create_string_buffer(128), 0
-    while lib.acp_aircraft_key_at(ac, i, buf, len(buf)) == 0:
-        keys.add(buf.value.decode())
-        i += 1
-    return keys
-
-
 def compare(ac, flat, label):
-    err = ctypes.create_string_buffer(256)
-    keys = c_keys(ac)
     check.count += 1
-    if keys != set(flat):
-        check.failures.append(f"{label}: key sets differ: only tomllib {sorted(set(flat) - keys)}, "
-                              f"only C {sorted(keys - set(flat))}")
-    for key, want in flat.items():
-        if isinstance(want, str):
-            check.count += 1
-            if lib.acp_aircraft_get_text(ac, key.encode(), err, len(err)) != 0 or \
-                    err.value.decode() != want:
-                check.failures.append(f"{label}: {key} = {err.value!r}, tomllib {want!r}")
-        else:
-            got = ctypes.c_double()
-            st = lib.acp_aircraft_get(ac, key.encode(), ctypes.byref(got))
-            check.count += 1
-            if st != 0 or got.value != float(want):
-                check.failures.append(f"{label}: {key}: C {got.value!r} (status {st}), "
-                                      f"tomllib {want!r}")
+    check.failures += [f"{label}: {d}" for d in model_differences(lib, ac, flat)]
 
 
 files = sorted(EXAMPLES.glob("*.toml"))

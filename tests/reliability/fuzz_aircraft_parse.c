@@ -3,7 +3,8 @@
    Checked on every input (abort on violation):
    - the status is ACP_OK or ACP_ERR_PARSE;
    - the error text fits its buffer, is terminated, leaves the bytes past
-     errlen alone, is "" on success and says something on error;
+     errlen alone, is "" on success, says something on error and is valid
+     UTF-8 (also when cut to the buffer);
    - on error the model is unchanged (a preset aircraft survives);
    - on success the model passes acp_aircraft_check(), its geometry is
      finite and positive, and a drag evaluation at a cruise-like condition
@@ -17,6 +18,7 @@
 #include <string.h>
 
 #include "acperf.h"
+#include "../c/utf8.h"
 
 #define CHECK(cond, what)                                                     \
   do {                                                                        \
@@ -54,6 +56,7 @@ int LLVMFuzzerTestOneInput(const uint8_t *data, size_t size) {
     CHECK(memchr(err, '\0', errlen) != NULL, "error text not terminated");
     if (st == ACP_OK) CHECK(err[0] == '\0', "error text on success");
     if (st != ACP_OK && errlen > 1) CHECK(err[0] != '\0', "empty error text on error");
+    CHECK(utf8_valid(err), "error text not valid UTF-8");
   }
 
   double v;

@@ -173,9 +173,14 @@ ACP_API int acp_aircraft_check(const acp_aircraft *ac, char *err, size_t errlen)
  * strings. Keys are bare keys; a key twice in one table, a table twice,
  * an unknown key and a value outside its range are errors. After the
  * last line the model is checked as by acp_aircraft_check(). The text must
- * be valid UTF-8 without control characters other than tab (as TOML).
- * Numbers are read with strtod() with '.' put in place of the current C
- * locale's decimal point, so a program's setlocale() does not change them.
+ * be valid UTF-8 without control characters other than tab (as TOML), with
+ * LF or CRLF line ends (a CR without a LF after it, also at the very end,
+ * is an error) and no byte order mark. The integer -0 reads as 0, the
+ * float -0.0 as -0.0 (as tomllib). Numbers are read with strtod() with '.'
+ * put in place of the current C locale's decimal point, so a program's
+ * setlocale() does not change them; the numbers in err are written with
+ * '.' whatever the locale. err is valid UTF-8 also when cut to errlen: a
+ * byte of the text outside ASCII is named in hex ("non-ASCII byte 0xC3").
  *
  * @param ac     the model; unchanged on error
  * @param text   NUL-terminated text
@@ -192,7 +197,9 @@ ACP_API int acp_aircraft_parse(acp_aircraft *ac, const char *text, char *err, si
  * is a parse error. No memory is allocated.
  *
  * @return as acp_aircraft_parse(), and ACP_ERR_IO when the file cannot be
- *         opened or read (err says which).
+ *         opened or read, or is not a regular file (a FIFO, a device or a
+ *         directory is refused without reading from it, so a FIFO without a
+ *         writer does not block); err says which.
  */
 ACP_API int acp_aircraft_load(acp_aircraft *ac, const char *path, char *err, size_t errlen);
 

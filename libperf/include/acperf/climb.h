@@ -211,7 +211,8 @@ ACP_API int acp_ceilings(const acp_aircraft *ac, double mass, double dtemp, acp_
  *                 outputs (s, m, kg), element [(i_mass n_hp + i_hp) n_dtemp + i_dtemp];
  *                 each may be NULL
  * @return the number of cells without a result (NaN): invalid arguments (all
- *         cells), an altitude not reached (it and those above), a failed climb.
+ *         cells), an altitude not reached (it and those above), a failed climb;
+ *         SIZE_MAX, nothing written, when n_mass n_hp n_dtemp overflows a size_t.
  */
 ACP_API size_t acp_climb_table(const acp_aircraft *ac, double hp_start, double wind, double step,
                                size_t n_mass, const double *mass, size_t n_hp,
