@@ -450,7 +450,152 @@ static void test_reference_schedule(void **state) {
   }
 }
 
+/* ==== 2. cruise against closed forms ===================================== */
+
+/* A jet written for the closed forms: parabolic polar CD = CD0 + k CL^2 (cd0
+   and oswald, no cl_min_drag, no korn_kappa so no wave drag, no winglets),
+   a turbofan with tsfc_c1 = 0 so TSFC = c0 sqrt(T/T0) is constant at one
+   altitude (propulsion.h), idle fuel flow far below any cruise fuel flow (the
+   floor never binds: checked), thrust enough for level flight. */
+static const char *CLOSED_FORM_JET =
+    "name = \"closed-form test jet (invented)\"\n"
+    "wing_area = 90.0\nspan = 30.0\ncd0 = 0.021\noswald = 0.82\ncl_max = 1.5\n"
+    "engine_type = \"turbofan\"\nengine_count = 2\nengine_thrust = 120000.0\n"
+    "tsfc_c0 = 1.7e-5\ntsfc_c1 = 0\nclimb_rating = 0.95\ncruise_rating = 0.9\n"
+    "idle_thrust_fraction = 0.05\nidle_fuel_flow = 0.001\ncruise_mach = 0.72\n";
+static int setup_closed_form(void **state) { return setup_with(state, aircraft_from_text(CLOSED_FORM_JET)); }
+#define CF_S 90.0
+#define CF_CD0 0.021
+#define CF_K (1.0 / (PI * (30.0 * 30.0 / 90.0) * 0.82)) /* k = 1/(pi A e) */
+#define CF_MACH 0.72
+#define CF_HP 10000.0
+
+/* c = c0 sqrt(T/T0) with c1 = 0 (Mattingly eq. 3.55a form, propulsion.h) */
+static double cf_tsfc(double hp) { return 1.7e-5 * sqrt(atmos(hp, 0.0).temperature / ACP_T0); }
+
+/* Composite trapezoidal rule's error bound (any numerical-analysis text,
+   e.g. Burden and Faires, "Numerical Analysis", composite trapezoidal rule;
+   from memory):
+   |E| <= (b - a) h^2 max|f''|/12. */
+static double trapezoid_bound(double length, double h, double f2max) {
+  return fabs(length) * h * h * f2max / 12.0;
+}
+
+/* (a) Constant altitude and constant TAS (fixed Mach), constant c: the
+   arctangent range (from memory: e.g. Anderson, "Aircraft Performance and
+   Design", McGraw-Hill 1999, chapter 5, jet range at constant h and V;
+   equation number not recalled). Re-derived here: level flight, thrust = drag,
+   dm/dt = -c D, dx/dt = V, so dx = -V dm/(c D(m)) with
+   D = q S CD0 + k (m g)^2/(q S) = A + B m^2, A = q S CD0, B = k g^2/(q S).
+   R = (V/c) integral from m1 to m0 of dm/(A + B m^2)
+     = (V/c) [atan(m sqrt(B/A))]/sqrt(A B), from m1 to m0, with
+   sqrt(A B) = g sqrt(k CD0) and m sqrt(B/A) = (m g/(q S)) sqrt(k/CD0), so
+   R = (V/(g c sqrt(k CD0))) [atan(CL0 sqrt(k/CD0)) - atan(CL1 sqrt(k/CD0))],
+   CL = m g/(q S); with (L/D)max = 1/(2 sqrt(k CD0)) the leading factor is
+   2 V (L/D)max/(g c). The time is R/V. */
+static void test_cruise_arctangent(void **state) {
+  const acp_aircraft *ac = ((fixture *)*state)->ac;
+  CHECK_CLOSE(key(ac, "induced_factor"), CF_K, 0.0, 1e-12, "k = 1/(pi A e)");
+  const acp_atmos a = atmos(CF_HP, 0.0);
+  const double v = CF_MACH * a.sound_speed, q = 0.5 * a.density * v * v, c = cf_tsfc(CF_HP);
+  const double m0 = 40000.0, fuel = 8000.0, m1 = m0 - fuel, step = 20.0;
+  const double root = sqrt(CF_K / CF_CD0), ld_max = 1.0 / (2.0 * sqrt(CF_K * CF_CD0));
+  const double cl0 = m0 * ACP_G0 / (q * CF_S), cl1 = m1 * ACP_G0 / (q * CF_S);
+  const double range = 2.0 * v * ld_max / (ACP_G0 * c) * (atan(cl0 * root) - atan(cl1 * root));
+  /* the engine model is what the closed form assumes: c = TSFC at the drag,
+     constant in mass, and the idle floor far away */
+  acp_engine_point e;
+  acp_drag_parts d;
+  assert_int_equal(acp_drag(ac, m1, CF_HP, 0.0, v, &d), ACP_OK);
+  CHECK_CLOSE(d.total, q * CF_S * CF_CD0 + CF_K * pow(m1 * ACP_G0, 2) / (q * CF_S), 0.0, 1e-12,
+              "drag = parabolic polar");
+  assert_int_equal(acp_engine_thrust(ac, d.total, CF_HP, 0.0, v, &e), ACP_OK);
+  CHECK_CLOSE(e.tsfc, c, 0.0, 1e-12, "TSFC = c0 sqrt(theta)");
+  CHECK_CLOSE(e.fuel_flow, c * d.total, 0.0, 1e-12, "fuel flow = c D at the lightest mass: no idle floor");
+  /* tolerance: the library's trapezoidal rule in mass on dx/dm = -V/(c D(m)),
+     step 20 kg; max |f''| estimated from (1/D)'' = (8 B^2 m^2 - 2 B (A + B m^2))/D^3
+     at both ends and the middle of [m1, m0] (it varies slowly there), with
+     a factor 2 of margin */
+  const double A = q * CF_S * CF_CD0, B = CF_K * ACP_G0 * ACP_G0 / (q * CF_S);
+  double f2 = 0.0;
+  for (int i = 0; i <= 2; ++i) {
+    const double m = m1 + 0.5 * fuel * i, D = A + B * m * m;
+    f2 = fmax(f2, fabs(8.0 * B * B * m * m - 2.0 * B * D) / (D * D * D) * v / c);
+  }
+  const double tol = 2.0 * trapezoid_bound(fuel, step, f2) / range + 1e-12;
+  assert_true(tol < 1e-6); /* a check tight enough to mean something */
+  acp_cruise_result r;
+  assert_int_equal(acp_cruise(ac, ACP_CRUISE_FIXED_MACH, 0, m0, CF_HP, 0, 0, ACP_CRUISE_END_FUEL,
+                              fuel, step, 0, &r),
+                   ACP_OK);
+  CHECK_CLOSE(r.distance, range, 0.0, tol, "fixed-Mach range = arctangent form");
+  CHECK_CLOSE(r.time, range / v, 0.0, tol, "fixed-Mach time = R/V");
+  CHECK_CLOSE(r.mass_end, m1, 0.0, 1e-12, "end mass");
+  CHECK_CLOSE(r.tas_start, v, 0.0, 1e-12, "TAS held");
+  CHECK_CLOSE(r.tas_end, v, 0.0, 1e-12, "TAS held");
+
+  /* (b) When acp_cruise approaches Breguet: the Breguet form needs constant L/D
+     and V (the cruise-climb at constant CL), which acp_cruise does not fly
+     (it holds the pressure altitude). At fixed V, dx = (V/(g c)) (L/D)(m) dm/m
+     and here L/D rises with m (CL below sqrt(CD0/k)), so the exact range lies
+     between the Breguet ranges with L/D at the end and at the start mass,
+     which close on it as the burn fraction goes to 0 (derived in the test). */
+  assert_true(cl0 < 1.0 / root);
+  const double ld0 = cl0 / (CF_CD0 + CF_K * cl0 * cl0), ld1 = cl1 / (CF_CD0 + CF_K * cl1 * cl1);
+  assert_true(r.distance > acp_breguet_range(v, c, ld1, m0, m1));
+  assert_true(r.distance < acp_breguet_range(v, c, ld0, m0, m1));
+}
+
+/* (b) The Breguet log forms (Breguet 1923; e.g. Anderson, "Aircraft
+   Performance and Design", 1999, section 5.13, from memory):
+   R = (V/(g c)) (L/D) ln(m0/m1), E = (1/(g c)) (L/D) ln(m0/m1).
+   Worked by hand (calculator) for V = 230 m/s, c = 1.6e-5 kg/(N s),
+   L/D = 17, m0 = 40,000 kg, m1 = 32,000 kg:
+     g c = 9.80665 x 1.6e-5 = 1.569064e-4 1/s;
+     V/(g c) = 230/1.569064e-4 = 1,465,842 m; x 17 = 24,919,315 m;
+     ln(1.25) = 0.2231436; R = 5,560,584 m (3,002.5 NM);
+     (L/D)/(g c) = 17/1.569064e-4 = 108,344.8 s; E = 24,176.45 s (6.72 h).
+   Held to 1e-6 (the hand working carries 7 digits); the test's own ln form to
+   1e-14. */
+static void test_breguet_log_forms(void **state) {
+  (void)state;
+  const double v = 230.0, c = 1.6e-5, ld = 17.0, m0 = 40000.0, m1 = 32000.0;
+  CHECK_CLOSE(acp_breguet_range(v, c, ld, m0, m1), 5560584.0, 0.0, 1e-6, "Breguet range, by hand");
+  CHECK_CLOSE(acp_breguet_endurance(c, ld, m0, m1), 24176.45, 0.0, 1e-6, "Breguet endurance, by hand");
+  CHECK_CLOSE(acp_breguet_range(v, c, ld, m0, m1), v / (ACP_G0 * c) * ld * log(m0 / m1), 0.0, 1e-14,
+              "Breguet range, ln form");
+  CHECK_CLOSE(acp_breguet_endurance(c, ld, m0, m1), ld / (ACP_G0 * c) * log(m0 / m1), 0.0, 1e-14,
+              "Breguet endurance, ln form");
+  /* range is V times endurance (same L/D, c, masses) */
+  CHECK_CLOSE(acp_breguet_range(v, c, ld, m0, m1), v * acp_breguet_endurance(c, ld, m0, m1), 0.0,
+              1e-14, "R = V E");
+  CHECK_CLOSE(acp_breguet_range(v, c, ld, m0, m0), 0.0, 1e-9, 0.0, "no fuel, no range");
+}
+
+/* Where acp_cruise does fly the Breguet case: holding at the least fuel flow
+   with constant TSFC is at VMD, where L/D = (L/D)max = 1/(2 sqrt(k CD0)) at
+   every mass (parabolic polar, common textbook result), so the endurance is
+   exactly E = (L/D)max/(g c) ln(m0/m1). Tolerance: the trapezoidal rule in
+   mass on dt/dm = -1/(c D), D = m g/(L/D)max, step 20 kg: (1/m)'' = 2/m^3;
+   plus the speed search's 1e-8 V bracket, which moves L/D at its maximum
+   only to second order (1e-16). */
+static void test_endurance_breguet_exact(void **state) {
+  const acp_aircraft *ac = ((fixture *)*state)->ac;
+  const double m0 = 38000.0, fuel = 3000.0, m1 = m0 - fuel, step = 20.0, c = cf_tsfc(CF_HP);
+  const double ld_max = 1.0 / (2.0 * sqrt(CF_K * CF_CD0));
+  const double e = ld_max / (ACP_G0 * c) * log(m0 / m1);
+  const double f2 = 2.0 / (m1 * m1 * m1) * ld_max / (ACP_G0 * c);
+  const double tol = 2.0 * trapezoid_bound(fuel, step, f2) / e + 1e-10;
+  acp_cruise_result r;
+  assert_int_equal(acp_cruise(ac, ACP_CRUISE_MAX_ENDURANCE, 0, m0, CF_HP, 0, 0, ACP_CRUISE_END_FUEL,
+                              fuel, step, 0, &r),
+                   ACP_OK);
+  CHECK_CLOSE(r.time, e, 0.0, tol, "endurance at VMD = Breguet endurance");
+  CHECK_CLOSE(r.time, acp_breguet_endurance(c, ld_max, m0, m1), 0.0, tol, "acp_breguet_endurance");
+}
+
 #define DEMO(t) cmocka_unit_test_setup_teardown(t, setup_demo, teardown)
+#define CLOSED_FORM(t) cmocka_unit_test_setup_teardown(t, setup_closed_form, teardown)
 
 int main(void) {
   const struct CMUnitTest tests[] = {
@@ -458,6 +603,9 @@ int main(void) {
       DEMO(test_climb_isa_calm),
       DEMO(test_climb_hot_headwind),
       DEMO(test_descent_isa_calm),
+      CLOSED_FORM(test_cruise_arctangent),
+      cmocka_unit_test(test_breguet_log_forms),
+      CLOSED_FORM(test_endurance_breguet_exact),
   };
   return cmocka_run_group_tests(tests, NULL, NULL);
 }
