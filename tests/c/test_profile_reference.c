@@ -594,6 +594,191 @@ static void test_endurance_breguet_exact(void **state) {
   CHECK_CLOSE(r.time, acp_breguet_endurance(c, ld_max, m0, m1), 0.0, tol, "acp_breguet_endurance");
 }
 
+/* ==== 3. trip bookkeeping ================================================ */
+
+/* The test's 500 NM sector at FL350 (ISA, fixed Mach, typical fuel policy),
+   held by the fixture's slot i so that the teardown frees it. */
+static acp_mission *sector_500nm(void **state, int i, double wind) {
+  acp_mission *m = acp_mission_new();
+  assert_non_null(m);
+  ((fixture *)*state)->ms[i] = m;
+  assert_int_equal(acp_mission_set(m, "distance", 500 * ACP_NM), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "cruise_altitude", FL350), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "wind", wind), ACP_OK);
+  return m;
+}
+
+/* The identities of mission.h and docs/methods/trip.md (definitions, so to
+   rounding: 1e-12 relative), the distance to the top-of-descent tolerance
+   (mission.c TOD_TOL: the descent's distance settles to 1 m), and each
+   segment equal to the public function called directly from the trip's own
+   top-of-climb and top-of-descent masses (the trip is their composition,
+   mission.h; same arithmetic, so 1e-12). */
+static void check_trip_identities(const acp_aircraft *ac, const acp_mission *ms,
+                                  const acp_trip_result *t) {
+  double dist, hc, ho, hd, dtemp, wind;
+  assert_int_equal(acp_mission_get(ms, "distance", &dist), ACP_OK);
+  assert_int_equal(acp_mission_get(ms, "cruise_altitude", &hc), ACP_OK);
+  assert_int_equal(acp_mission_get(ms, "origin_altitude", &ho), ACP_OK);
+  assert_int_equal(acp_mission_get(ms, "destination_altitude", &hd), ACP_OK);
+  assert_int_equal(acp_mission_get(ms, "isa_deviation", &dtemp), ACP_OK);
+  assert_int_equal(acp_mission_get(ms, "wind", &wind), ACP_OK);
+  CHECK_CLOSE(t->infeasible, ACP_TRIP_FEASIBLE, 0.0, 0.0, "feasible");
+  CHECK_CLOSE(t->trip_fuel, t->climb_fuel + t->cruise_fuel + t->descent_fuel, 0.0, 1e-12,
+              "trip fuel = climb + cruise + descent");
+  CHECK_CLOSE(t->trip_time, t->climb_time + t->cruise_time + t->descent_time, 0.0, 1e-12,
+              "trip time = climb + cruise + descent");
+  CHECK_CLOSE(t->climb_distance + t->cruise_distance + t->descent_distance, dist, 1.0, 0.0,
+              "phases cover the distance (top of descent to 1 m)");
+  CHECK_CLOSE(t->takeoff_mass - t->trip_fuel, t->landing_mass, 0.0, 1e-12, "TOW - trip = LW");
+  CHECK_CLOSE(t->landing_mass - t->contingency_fuel - t->alternate_fuel - t->final_reserve_fuel,
+              t->zero_fuel_mass, 0.0, 1e-12, "LW - reserves = ZFW");
+  CHECK_CLOSE(t->block_fuel,
+              t->taxi_fuel + t->trip_fuel + t->contingency_fuel + t->alternate_fuel +
+                  t->final_reserve_fuel,
+              0.0, 1e-12, "block = taxi + trip + contingency + alternate + final reserve");
+  CHECK_CLOSE(t->takeoff_fuel, t->block_fuel - t->taxi_fuel, 0.0, 1e-12, "take-off fuel = block - taxi");
+  CHECK_CLOSE(t->ramp_mass, t->takeoff_mass + t->taxi_fuel, 0.0, 1e-12, "ramp = take-off + taxi");
+  assert_true(t->contingency_fuel > 0.0 && t->final_reserve_fuel > 0.0 && t->taxi_fuel > 0.0);
+  /* the segments from the public functions */
+  acp_profile cl, de;
+  acp_cruise_result cr;
+  assert_int_equal(acp_climb(ac, t->takeoff_mass, ho, hc, dtemp, wind, 0, &cl), ACP_OK);
+  CHECK_CLOSE(cl.time, t->climb_time, 0.0, 1e-12, "climb time = acp_climb");
+  CHECK_CLOSE(cl.distance, t->climb_distance, 0.0, 1e-12, "climb distance = acp_climb");
+  CHECK_CLOSE(cl.fuel, t->climb_fuel, 0.0, 1e-12, "climb fuel = acp_climb");
+  CHECK_CLOSE(cl.mass_end, t->top_of_climb_mass, 0.0, 1e-12, "top-of-climb mass");
+  assert_int_equal(acp_cruise(ac, ACP_CRUISE_FIXED_MACH, 0, t->top_of_climb_mass, hc, dtemp, wind,
+                              ACP_CRUISE_END_DISTANCE, t->cruise_distance, 0, 0, &cr),
+                   ACP_OK);
+  CHECK_CLOSE(cr.time, t->cruise_time, 0.0, 1e-12, "cruise time = acp_cruise");
+  CHECK_CLOSE(cr.fuel, t->cruise_fuel, 0.0, 1e-12, "cruise fuel = acp_cruise");
+  CHECK_CLOSE(cr.mass_end, t->top_of_descent_mass, 0.0, 1e-12, "top-of-descent mass");
+  assert_int_equal(acp_descent(ac, t->top_of_descent_mass, hc, hd, dtemp, wind, 0, &de), ACP_OK);
+  CHECK_CLOSE(de.time, t->descent_time, 0.0, 1e-12, "descent time = acp_descent");
+  CHECK_CLOSE(de.distance, t->descent_distance, 0.0, 1e-12, "descent distance = acp_descent");
+  CHECK_CLOSE(de.fuel, t->descent_fuel, 0.0, 1e-12, "descent fuel = acp_descent");
+  CHECK_CLOSE(de.mass_end, t->landing_mass, 0.0, 1e-12, "landing mass");
+}
+
+/* Fixed-Mach level cruise per metre of ground: thrust = drag, fuel flow of
+   the engines delivering it (acp_engine_thrust), dm/dx = -Wf/(V + w),
+   dt/dx = 1/(V + w) (the definition of specific air range, cruise.h). */
+typedef struct {
+  const acp_aircraft *ac;
+  double hp, dtemp, wind, tas;
+} ref_cruise;
+
+static void cruise_rates(const void *ctx, double x, double mass, ref_state *d) {
+  const ref_cruise *c = ctx;
+  (void)x;
+  acp_drag_parts dr;
+  acp_engine_point e;
+  assert_int_equal(acp_drag(c->ac, mass, c->hp, c->dtemp, c->tas, &dr), ACP_OK);
+  assert_int_equal(acp_engine_thrust(c->ac, dr.total, c->hp, c->dtemp, c->tas, &e), ACP_OK);
+  d->t = 1.0 / (c->tas + c->wind);
+  d->x = 1.0;
+  d->m = -e.fuel_flow / (c->tas + c->wind);
+}
+
+#define CRUISE_REF_STEP 5000.0 /* m of ground per RK4 step */
+
+static ref_state ref_cruise_fly(const ref_cruise *c, double mass, double distance) {
+  const ref_state s0 = {0.0, 0.0, mass};
+  return rk4(cruise_rates, c, 0.0, distance, steps_for(distance, CRUISE_REF_STEP), s0);
+}
+
+/* Trip from a take-off mass, 500 NM at FL350, ISA, calm, fixed Mach. */
+static void test_trip_identities(void **state) {
+  const acp_aircraft *ac = ((fixture *)*state)->ac;
+  acp_mission *ms = sector_500nm(state, 0, 0.0);
+  acp_trip_result t;
+  assert_int_equal(acp_trip(ac, ms, 36500.0, &t), ACP_OK);
+  check_trip_identities(ac, ms, &t);
+  /* the cruise segment alone against the test's integral of the fuel flow
+     from the trip's top-of-climb mass over the trip's cruise distance;
+     tolerance 5e-5: the library's Heun steps of 50 NM change fuel and time
+     by at most 5e-6 when halved (docs/methods/cruise.md), RK4 in 5 km steps
+     is far finer */
+  const ref_cruise rc = {ac, FL350, 0.0, 0.0, key(ac, "cruise_mach") * atmos(FL350, 0.0).sound_speed};
+  const ref_state c = ref_cruise_fly(&rc, t.top_of_climb_mass, t.cruise_distance);
+  CHECK_CLOSE(t.cruise_fuel, t.top_of_climb_mass - c.m, 0.0, 5e-5, "cruise fuel = integral of fuel flow");
+  CHECK_CLOSE(t.cruise_time, c.t, 0.0, 5e-5, "cruise time = integral");
+}
+
+/* Trip for a zero-fuel mass: the same identities, and the whole trip against
+   the test's own integration: climb and descent from ref_fly, the cruise from
+   ref_cruise_fly, the top of descent found by the test (fixed-point passes on
+   the descent's start mass, as trip.md describes the method). */
+static void test_trip_zero_fuel_mass_reference(void **state) {
+  const acp_aircraft *ac = ((fixture *)*state)->ac;
+  acp_mission *ms = sector_500nm(state, 0, 0.0);
+  acp_trip_result t;
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, ms, 32000.0, &t), ACP_OK);
+  CHECK_CLOSE(t.zero_fuel_mass, 32000.0, 0.1, 0.0, "zero-fuel mass matched to 0.1 kg (mission.h)");
+  check_trip_identities(ac, ms, &t);
+  /* the reference trip from the same take-off mass */
+  const double dist = 500 * ACP_NM;
+  const ref_profile cl = ref_fly(ac, 0, t.takeoff_mass, 0.0, FL350, 0.0, 0.0, 50.0);
+  const ref_cruise rc = {ac, FL350, 0.0, 0.0, key(ac, "cruise_mach") * atmos(FL350, 0.0).sound_speed};
+  double m_tod = cl.end.m;
+  ref_profile de = {.end = {0, 0, 0}};
+  ref_state cr = {0, 0, 0};
+  double d_prev = NAN;
+  for (int pass = 0; pass < 6; ++pass) {
+    de = ref_fly(ac, 1, m_tod, FL350, 0.0, 0.0, 0.0, 50.0);
+    if (fabs(de.end.x - d_prev) < 0.01) break;
+    d_prev = de.end.x;
+    cr = ref_cruise_fly(&rc, cl.end.m, dist - cl.end.x - de.end.x);
+    m_tod = cr.m;
+  }
+  assert_true(fabs(de.end.x - d_prev) < 0.01);
+  /* tolerance PROFILE_TOL: the climb's and descent's (section 1); the
+     cruise's is ten times smaller (test_trip_identities) */
+  int fails = 0;
+  expect_close(&fails, t.climb_time, cl.end.t, PROFILE_TOL, "trip climb time = integral");
+  expect_close(&fails, t.climb_distance, cl.end.x, PROFILE_TOL, "trip climb distance = integral");
+  expect_close(&fails, t.descent_time, de.end.t, PROFILE_TOL, "trip descent time = integral");
+  expect_close(&fails, t.descent_distance, de.end.x, PROFILE_TOL, "trip descent distance = integral");
+  expect_close(&fails, t.trip_time, cl.end.t + cr.t + de.end.t, PROFILE_TOL, "trip time = integral");
+  /* these FAIL before the fix of issue 12 (defect 1): climb and descent
+     speed changes charged twice (and the cruise then starts too light) */
+  expect_close(&fails, t.climb_fuel, t.takeoff_mass - cl.end.m, PROFILE_TOL,
+               "trip climb fuel = integral of fuel flow");
+  expect_close(&fails, t.descent_fuel, m_tod - de.end.m, PROFILE_TOL,
+               "trip descent fuel = integral of fuel flow");
+  expect_close(&fails, t.trip_fuel, t.takeoff_mass - de.end.m, PROFILE_TOL,
+               "trip fuel = integral of fuel flow");
+  assert_int_equal(fails, 0);
+}
+
+/* ==== 4. directions ====================================================== */
+
+/* Directions every performance engineer expects (common practice):
+   - a headwind lowers the ground speed, so the same ground distance takes
+     longer in the air and burns more;
+   - a heavier zero-fuel mass needs more lift, so more induced drag and fuel;
+   - on a warmer day (ISA+15) the climb to FL350 takes longer: the turbofan's
+     thrust lapses more (theta0 above the throttle ratio, Mattingly eq. 2.45a),
+     the air is thinner at each pressure altitude, and the geometric height
+     between two pressure altitudes is larger (T/Tstd). */
+static void test_directions(void **state) {
+  const acp_aircraft *ac = ((fixture *)*state)->ac;
+  acp_mission *calm = sector_500nm(state, 0, 0.0), *head = sector_500nm(state, 1, -20.0);
+  acp_trip_result a, b;
+  assert_int_equal(acp_trip(ac, calm, 36500.0, &a), ACP_OK);
+  assert_int_equal(acp_trip(ac, head, 36500.0, &b), ACP_OK);
+  assert_true(b.trip_fuel > a.trip_fuel);
+  assert_true(b.trip_time > a.trip_time);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, calm, 32000.0, &a), ACP_OK);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, calm, 33000.0, &b), ACP_OK);
+  assert_true(b.trip_fuel > a.trip_fuel);
+  acp_profile isa, hot;
+  assert_int_equal(acp_climb(ac, 38000.0, FT1500, FL350, 0.0, 0.0, 0, &isa), ACP_OK);
+  assert_int_equal(acp_climb(ac, 38000.0, FT1500, FL350, 15.0, 0.0, 0, &hot), ACP_OK);
+  assert_true(hot.time > isa.time);
+}
+
 #define DEMO(t) cmocka_unit_test_setup_teardown(t, setup_demo, teardown)
 #define CLOSED_FORM(t) cmocka_unit_test_setup_teardown(t, setup_closed_form, teardown)
 
@@ -606,6 +791,9 @@ int main(void) {
       CLOSED_FORM(test_cruise_arctangent),
       cmocka_unit_test(test_breguet_log_forms),
       CLOSED_FORM(test_endurance_breguet_exact),
+      DEMO(test_trip_identities),
+      DEMO(test_trip_zero_fuel_mass_reference),
+      DEMO(test_directions),
   };
   return cmocka_run_group_tests(tests, NULL, NULL);
 }
