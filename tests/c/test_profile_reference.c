@@ -624,12 +624,18 @@ static void check_trip_identities(const acp_aircraft *ac, const acp_mission *ms,
   assert_int_equal(acp_mission_get(ms, "isa_deviation", &dtemp), ACP_OK);
   assert_int_equal(acp_mission_get(ms, "wind", &wind), ACP_OK);
   CHECK_CLOSE(t->infeasible, ACP_TRIP_FEASIBLE, 0.0, 0.0, "feasible");
-  CHECK_CLOSE(t->trip_fuel, t->climb_fuel + t->cruise_fuel + t->descent_fuel, 0.0, 1e-12,
-              "trip fuel = climb + cruise + descent");
-  CHECK_CLOSE(t->trip_time, t->climb_time + t->cruise_time + t->descent_time, 0.0, 1e-12,
-              "trip time = climb + cruise + descent");
-  CHECK_CLOSE(t->climb_distance + t->cruise_distance + t->descent_distance, dist, 1.0, 0.0,
-              "phases cover the distance (top of descent to 1 m)");
+  /* six segments (mission.h): the demo jet accelerates from its climb Mach to
+     its cruise Mach at the top of climb; it descends at its cruise Mach and
+     has no approach_cas, so the other two speed changes are zero here */
+  CHECK_CLOSE(t->descent_deceleration_fuel + t->approach_deceleration_fuel, 0.0, 0.0, 0.0,
+              "no deceleration segments for the demo jet");
+  CHECK_CLOSE(t->trip_fuel, t->climb_fuel + t->climb_acceleration_fuel + t->cruise_fuel + t->descent_fuel,
+              0.0, 1e-12, "trip fuel = climb + acceleration + cruise + descent");
+  CHECK_CLOSE(t->trip_time, t->climb_time + t->climb_acceleration_time + t->cruise_time + t->descent_time,
+              0.0, 1e-12, "trip time = climb + acceleration + cruise + descent");
+  CHECK_CLOSE(t->climb_distance + t->climb_acceleration_distance + t->cruise_distance +
+                  t->descent_distance,
+              dist, 1.0, 0.0, "phases cover the distance (top of descent to 1 m)");
   CHECK_CLOSE(t->takeoff_mass - t->trip_fuel, t->landing_mass, 0.0, 1e-12, "TOW - trip = LW");
   CHECK_CLOSE(t->landing_mass - t->contingency_fuel - t->alternate_fuel - t->final_reserve_fuel,
               t->zero_fuel_mass, 0.0, 1e-12, "LW - reserves = ZFW");
@@ -648,7 +654,13 @@ static void check_trip_identities(const acp_aircraft *ac, const acp_mission *ms,
   CHECK_CLOSE(cl.distance, t->climb_distance, 0.0, 1e-12, "climb distance = acp_climb");
   CHECK_CLOSE(cl.fuel, t->climb_fuel, 0.0, 1e-12, "climb fuel = acp_climb");
   CHECK_CLOSE(cl.mass_end, t->top_of_climb_mass, 0.0, 1e-12, "top-of-climb mass");
-  assert_int_equal(acp_cruise(ac, ACP_CRUISE_FIXED_MACH, 0, t->top_of_climb_mass, hc, dtemp, wind,
+  acp_profile acc;
+  const double v_cruise = key(ac, "cruise_mach") * atmos(hc, dtemp).sound_speed;
+  assert_int_equal(acp_level_speed_change(ac, cl.mass_end, hc, dtemp, wind, cl.tas_end, v_cruise,
+                                          &acc), ACP_OK);
+  CHECK_CLOSE(acc.fuel, t->climb_acceleration_fuel, 0.0, 1e-12, "acceleration = acp_level_speed_change");
+  CHECK_CLOSE(acc.distance, t->climb_acceleration_distance, 0.0, 1e-12, "its distance");
+  assert_int_equal(acp_cruise(ac, ACP_CRUISE_FIXED_MACH, 0, acc.mass_end, hc, dtemp, wind,
                               ACP_CRUISE_END_DISTANCE, t->cruise_distance, 0, 0, &cr),
                    ACP_OK);
   CHECK_CLOSE(cr.time, t->cruise_time, 0.0, 1e-12, "cruise time = acp_cruise");
@@ -701,8 +713,9 @@ static void test_trip_identities(void **state) {
      by at most 5e-6 when halved (docs/methods/cruise.md), RK4 in 5 km steps
      is far finer */
   const ref_cruise rc = {ac, FL350, 0.0, 0.0, key(ac, "cruise_mach") * atmos(FL350, 0.0).sound_speed};
-  const ref_state c = ref_cruise_fly(&rc, t.top_of_climb_mass, t.cruise_distance);
-  CHECK_CLOSE(t.cruise_fuel, t.top_of_climb_mass - c.m, 0.0, 5e-5, "cruise fuel = integral of fuel flow");
+  const double m_cruise = t.top_of_climb_mass - t.climb_acceleration_fuel;
+  const ref_state c = ref_cruise_fly(&rc, m_cruise, t.cruise_distance);
+  CHECK_CLOSE(t.cruise_fuel, m_cruise - c.m, 0.0, 5e-5, "cruise fuel = integral of fuel flow");
   CHECK_CLOSE(t.cruise_time, c.t, 0.0, 5e-5, "cruise time = integral");
 }
 
@@ -721,7 +734,13 @@ static void test_trip_zero_fuel_mass_reference(void **state) {
   const double dist = 500 * ACP_NM;
   const ref_profile cl = ref_fly(ac, 0, t.takeoff_mass, 0.0, FL350, 0.0, 0.0, 50.0);
   const ref_cruise rc = {ac, FL350, 0.0, 0.0, key(ac, "cruise_mach") * atmos(FL350, 0.0).sound_speed};
-  double m_tod = cl.end.m;
+  /* the level acceleration from the climb's end speed to the cruise Mach at
+     the top of climb (mission.h), at the climb rating */
+  const ref_day climbing = {ac, ACP_RATING_CLIMB, 0.0, 0.0};
+  const ref_level top = {&climbing, FL350};
+  const ref_state acc = integrate(level_rates, level_theta0, key(ac, "throttle_ratio"), &top, cl.v_end,
+                                  rc.tas, 0.05, (ref_state){0.0, 0.0, cl.end.m});
+  double m_tod = acc.m;
   ref_profile de = {.end = {0, 0, 0}};
   ref_state cr = {0, 0, 0};
   double d_prev = NAN;
@@ -729,7 +748,7 @@ static void test_trip_zero_fuel_mass_reference(void **state) {
     de = ref_fly(ac, 1, m_tod, FL350, 0.0, 0.0, 0.0, 50.0);
     if (fabs(de.end.x - d_prev) < 0.01) break;
     d_prev = de.end.x;
-    cr = ref_cruise_fly(&rc, cl.end.m, dist - cl.end.x - de.end.x);
+    cr = ref_cruise_fly(&rc, acc.m, dist - cl.end.x - acc.x - de.end.x);
     m_tod = cr.m;
   }
   assert_true(fabs(de.end.x - d_prev) < 0.01);
@@ -740,7 +759,11 @@ static void test_trip_zero_fuel_mass_reference(void **state) {
   expect_close(&fails, t.climb_distance, cl.end.x, PROFILE_TOL, "trip climb distance = integral");
   expect_close(&fails, t.descent_time, de.end.t, PROFILE_TOL, "trip descent time = integral");
   expect_close(&fails, t.descent_distance, de.end.x, PROFILE_TOL, "trip descent distance = integral");
-  expect_close(&fails, t.trip_time, cl.end.t + cr.t + de.end.t, PROFILE_TOL, "trip time = integral");
+  expect_close(&fails, t.climb_acceleration_time, acc.t, PROFILE_TOL, "top-of-climb acceleration time");
+  expect_close(&fails, t.climb_acceleration_fuel, cl.end.m - acc.m, PROFILE_TOL,
+               "top-of-climb acceleration fuel");
+  expect_close(&fails, t.trip_time, cl.end.t + acc.t + cr.t + de.end.t, PROFILE_TOL,
+               "trip time = integral");
   /* these FAIL before the fix of issue 12 (defect 1): climb and descent
      speed changes charged twice (and the cruise then starts too light) */
   expect_close(&fails, t.climb_fuel, t.takeoff_mass - cl.end.m, PROFILE_TOL,
