@@ -14,9 +14,9 @@
 #include "internal.h"
 #include "performance_internal.h"
 
-#define TOD_ITERATIONS 20      /* top-of-descent iterations */
+#define TOD_ITERATIONS ACP_TRIP_DESCENT_ITERATIONS
 #define TOD_TOL 1.0            /* m: the descent's distance settles */
-#define ZFM_ITERATIONS 30      /* take-off mass iterations */
+#define ZFM_ITERATIONS ACP_TRIP_MASS_ITERATIONS
 #define ZFM_TOL 0.1            /* kg: zero-fuel mass match (issue 4) */
 #define TAXI_SPEED 5.0         /* m/s (about 10 kt) for the idle fuel flow of taxiing */
 
@@ -157,6 +157,13 @@ static int segment_error(acp_trip_result *o, int st, double limit, double excess
   return st;
 }
 
+/* The trip's cruise step: the mission's (or the default), lengthened where the
+   cruise would need more than ACP_TRIP_CRUISE_STEPS_MAX steps (mission.h). */
+static double trip_cruise_step(double step, double d_cruise) {
+  const double s = step > 0.0 ? step : ACP_CRUISE_STEP_DISTANCE_DEFAULT;
+  return fmax(s, d_cruise / ACP_TRIP_CRUISE_STEPS_MAX);
+}
+
 /* A level speed change of no length: the speed is already right. */
 static void no_change(acp_profile *p, double mass, double tas) {
   p->time = p->distance = p->fuel = 0.0;
@@ -283,8 +290,8 @@ static int fly(const acp_aircraft *ac, const acp_mission *ms, double tow, acp_tr
       cr->sar_mean = ACP_NAN;
     } else {
       st = perf_cruise(ac, mode, v[MK_COST_INDEX], m_cruise, hc, dtemp, wind,
-                       ACP_CRUISE_END_DISTANCE, d_cruise, v[MK_CRUISE_STEP], v[MK_STEP_CLIMB],
-                       PERF_RELAX_MTOW, cr);
+                       ACP_CRUISE_END_DISTANCE, d_cruise, trip_cruise_step(v[MK_CRUISE_STEP], d_cruise),
+                       v[MK_STEP_CLIMB], PERF_RELAX_MTOW, cr);
       if (st != ACP_OK) return segment_error(o, st, cr->limit, cr->limit_excess);
     }
     m_tod = cr->mass_end;
@@ -427,6 +434,7 @@ int acp_trip_for_zero_fuel_mass(const acp_aircraft *ac, const acp_mission *missi
   /* g(tow) = zero-fuel mass of the trip flown from tow, less the wanted one;
      g rises with tow at a slope a little below 1. Start from below (the
      take-off mass is at least the zero-fuel mass plus the alternate fuel). */
+  const double mtow = ac_value(ac, AK_MASS_MAX_TAKEOFF), cap = ac_value(ac, AK_FUEL_CAPACITY);
   double tow = zero_fuel_mass + mission->v[MK_ALTERNATE_FUEL], tow_prev = ACP_NAN,
          g_prev = ACP_NAN;
   for (int k = 1; k <= ZFM_ITERATIONS; ++k) {
@@ -439,6 +447,10 @@ int acp_trip_for_zero_fuel_mass(const acp_aircraft *ac, const acp_mission *missi
       tow += out->excess + 0.05 * zero_fuel_mass;
       continue;
     }
+    /* a trip that cannot be flown from a take-off mass above the limit: the
+       mass needed is above it by at least that much */
+    if (st != ACP_OK && tow > mtow)
+      return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_TAKEOFF, tow - mtow);
     if (st != ACP_OK) {
       if (isnan(out->infeasible)) result_nan(out);
       return st;
@@ -453,7 +465,16 @@ int acp_trip_for_zero_fuel_mass(const acp_aircraft *ac, const acp_mission *missi
     const double slope = isnan(g_prev) || g == g_prev ? 1.0 : (g - g_prev) / (tow - tow_prev);
     tow_prev = tow;
     g_prev = g;
-    tow -= g / (slope > 0.1 ? slope : 1.0);
+    const double next = tow - g / (slope > 0.1 ? slope : 1.0);
+    /* Found impossible early (mission.h): heavier still than a take-off mass
+       already above the limit, or more fuel still than a block fuel already
+       above the capacity; the excess is that of the secant estimate next. */
+    if (next > tow && tow > mtow)
+      return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_TAKEOFF, next - mtow);
+    if (next > tow && out->block_fuel > cap)
+      return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_OVER_FUEL_CAPACITY,
+                        out->block_fuel + (next - tow) - cap);
+    tow = next;
   }
   result_nan(out);
   return ACP_ERR_NO_CONVERGENCE;

@@ -429,12 +429,61 @@ static void test_whole_profile(void **state) {
   acp_aircraft_free(ac);
 }
 
+/* Defect 9 of issue 12: a fine cruise_step multiplied by the top-of-descent
+   and take-off-mass iterations made trips take seconds (long-range cruise,
+   cruise_step 100 m: 3,000 km in 3.7 s, for a zero-fuel mass 16 s), and an
+   impossible 9,900 km trip took 18.8 s to say so. The trip's cruise now takes
+   at most ACP_TRIP_CRUISE_STEPS_MAX steps (mission.h): a 100 m step gives the
+   same trip as the step the cap makes of it (to 1e-9: the cap is taken of
+   each top-of-descent pass's cruise distance, which differ by less than a
+   metre); and the impossible
+   trip stops at the take-off mass limit (it ended as "cannot cruise" at a
+   take-off mass far above the limit). Work bounds are what is tested here;
+   times are measured by tests/bench, not here. */
+static void test_work_bounds(void **state) {
+  (void)state;
+  acp_aircraft *ac = aircraft_from_example("regional_jet.toml");
+  acp_mission *m = acp_mission_new();
+  assert_int_equal(acp_mission_set(m, "distance", 3.0e6), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "cruise_altitude", 350 * ACP_FL), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "cruise_mode", ACP_CRUISE_LONG_RANGE), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "cruise_step", 100.0), ACP_OK);
+  acp_trip_result fine, capped;
+  assert_int_equal(acp_trip(ac, m, 38000, &fine), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "cruise_step", fine.cruise_distance / ACP_TRIP_CRUISE_STEPS_MAX),
+                   ACP_OK);
+  assert_int_equal(acp_trip(ac, m, 38000, &capped), ACP_OK);
+  CHECK_CLOSE(fine.trip_fuel, capped.trip_fuel, 0.0, 1e-9, "a 100 m step is the capped step");
+  CHECK_CLOSE(fine.cruise_time, capped.cruise_time, 0.0, 1e-9, "the same cruise time");
+  /* the capped trip against the default 50 NM step: the same fuel within the
+     integration error of Heun's method (1e-5 relative, cruise.md) */
+  assert_int_equal(acp_mission_set(m, "cruise_step", 0.0), ACP_OK);
+  acp_trip_result coarse;
+  assert_int_equal(acp_trip(ac, m, 38000, &coarse), ACP_OK);
+  CHECK_CLOSE(fine.trip_fuel, coarse.trip_fuel, 0.0, 1e-5, "capped step against the default");
+  /* found impossible early, for the right reason */
+  assert_int_equal(acp_mission_set(m, "distance", 9.9e6), ACP_OK);
+  acp_trip_result far;
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 30000, &far), ACP_ERR_RANGE);
+  CHECK_CLOSE(far.infeasible, ACP_TRIP_OVER_MAX_TAKEOFF, 0.0, 0.0, "9,900 km: above MTOW");
+  assert_true(far.excess > 0.0);
+  /* over the fuel capacity first when the take-off mass limit is lifted */
+  assert_int_equal(acp_aircraft_unset(ac, "mass_max_takeoff"), ACP_OK);
+  assert_int_equal(acp_mission_set(m, "distance", 6.0e6), ACP_OK);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 26000, &far), ACP_ERR_RANGE);
+  CHECK_CLOSE(far.infeasible, ACP_TRIP_OVER_FUEL_CAPACITY, 0.0, 0.0, "6,000 km: over capacity");
+  assert_true(far.excess > 0.0);
+  acp_mission_free(m);
+  acp_aircraft_free(ac);
+}
+
 int main(void) {
   const struct CMUnitTest tests[] = {
       cmocka_unit_test(test_mission_keys),   cmocka_unit_test(test_bookkeeping),
       cmocka_unit_test(test_policy),         cmocka_unit_test(test_modes_and_wind),
       cmocka_unit_test(test_trip_step_climbs), cmocka_unit_test(test_infeasible),
       cmocka_unit_test(test_bad_arguments),  cmocka_unit_test(test_whole_profile),
+      cmocka_unit_test(test_work_bounds),
   };
   return cmocka_run_group_tests(tests, NULL, NULL);
 }

@@ -46,7 +46,7 @@
  * | cost_index           | kg/min | 0 to 1,000       | 0 |
  * | step_climb           | m      | 0 or 100 to 3,000| 0: none |
  * | climb_step           | m      | 0 or 10 to 1,000 | 0: ACP_CLIMB_STEP_DEFAULT |
- * | cruise_step          | m      | 0 or 100 to 1e6  | 0: ACP_CRUISE_STEP_DISTANCE_DEFAULT |
+ * | cruise_step          | m      | 0 or 100 to 1e6  | 0: ACP_CRUISE_STEP_DISTANCE_DEFAULT; lengthened to at most ACP_TRIP_CRUISE_STEPS_MAX steps |
  * | taxi_time            | s      | 0 to 7,200       | 600 (typical default; taxi-out) |
  * | taxi_fuel            | kg     | 0 to 1e5         | not set: taxi_time x flight-idle fuel flow at the origin |
  * | contingency_fraction |        | 0 to 0.5         | 0.05 (typical default) |
@@ -70,6 +70,13 @@
 #define ACP_HOLDING_HEIGHT_TYPICAL 457.2
 /** Typical default taxi-out time: 10 min, s. */
 #define ACP_TAXI_TIME_TYPICAL 600.0
+/** Most steps of a trip's cruise: a shorter cruise_step is lengthened to the cruise distance
+    over this (Heun's method errs by about 1e-5 of the cruise fuel at 100 steps, cruise.md). */
+#define ACP_TRIP_CRUISE_STEPS_MAX 100.0
+/** Most passes of the top-of-descent iteration of one trip. */
+#define ACP_TRIP_DESCENT_ITERATIONS 20
+/** Most trips flown by acp_trip_for_zero_fuel_mass(). */
+#define ACP_TRIP_MASS_ITERATIONS 30
 
 ACP_BEGIN_DECLS
 
@@ -188,8 +195,21 @@ ACP_API int acp_trip(const acp_aircraft *ac, const acp_mission *mission, double 
  * (secant steps on the zero-fuel-mass mismatch, starting from fixed-point
  * steps) until the trip's zero-fuel mass matches to 0.1 kg.
  *
+ * An impossible trip is found early: when an iterate's take-off mass is
+ * already above mass_max_takeoff, or its block fuel above fuel_capacity, and
+ * the next iterate needs more still, the call stops with that reason; the
+ * excess is then the secant estimate of the next iterate less the limit (an
+ * estimate, not a converged figure). A trip that cannot be flown at all from
+ * an iterate above mass_max_takeoff is ACP_TRIP_OVER_MAX_TAKEOFF with the
+ * excess of that iterate (a lower bound).
+ *
+ * Work: at most ACP_TRIP_MASS_ITERATIONS trips, each at most
+ * ACP_TRIP_DESCENT_ITERATIONS cruises of at most ACP_TRIP_CRUISE_STEPS_MAX
+ * steps (and one climb, descent and holding, bounded as in climb.h and
+ * cruise.h).
+ *
  * @param zero_fuel_mass kg
- * @return as acp_trip(); ACP_ERR_NO_CONVERGENCE after 30 iterations.
+ * @return as acp_trip(); ACP_ERR_NO_CONVERGENCE after ACP_TRIP_MASS_ITERATIONS trips.
  */
 ACP_API int acp_trip_for_zero_fuel_mass(const acp_aircraft *ac, const acp_mission *mission,
                                         double zero_fuel_mass, acp_trip_result *out);
