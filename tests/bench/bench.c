@@ -113,6 +113,22 @@ __attribute__((noinline)) static void k_trip(const arrays *a) {
   acp_mission_free(m);
 }
 
+/* The worst trip of issue 12's probes: long-range cruise over 3,000 km with a
+   100 m cruise_step (16 s before the trip's cruise steps were bounded). */
+__attribute__((noinline)) static void k_trip_worst(const arrays *a) {
+  acp_mission *m = acp_mission_new();
+  acp_mission_set(m, "distance", 3.0e6);
+  acp_mission_set(m, "cruise_altitude", 10668.0);
+  acp_mission_set(m, "cruise_mode", ACP_CRUISE_LONG_RANGE);
+  acp_mission_set(m, "cruise_step", 100.0);
+  for (size_t i = 0; i < a->n; ++i) {
+    acp_trip_result r;
+    acp_trip_for_zero_fuel_mass(a->ac, m, a->mass[i] - 5000.0, &r);
+    a->o1[i] = r.trip_fuel;
+  }
+  acp_mission_free(m);
+}
+
 typedef struct {
   const char *name;
   void (*run)(const arrays *);
@@ -142,6 +158,7 @@ static const kernel KERNELS[] = {
     {"climb_1500ft_to_FL350", k_climb, 50},
     {"cruise_500NM", k_cruise, 20},
     {"trip_500NM", k_trip, 5},
+    {"trip_3000km_long_range_step_100m", k_trip_worst, 2},
 };
 
 static double now_ns(void) {
