@@ -9,10 +9,20 @@
  * thrust and fuel flow from acperf/propulsion.h (climb: maximum-climb rating;
  * descent: flight idle), drag from acperf/polar.h. Pressure altitude changes
  * at (Tstd/T) dh/dt. The profile is integrated in steps of pressure altitude
- * with the trapezoidal rule on dt/dhp, dm/dhp and dx/dhp and a predicted end
- * mass (second order); the level acceleration (climb) or deceleration
- * (descent) between the low-altitude CAS and the schedule's CAS happens at the
- * speed-limit altitude, integrated in steps of TAS from dV/dt = (T - D)/m.
+ * with Simpson's rule on dt/dhp, dm/dhp and dx/dhp, the masses at the middle
+ * and the end predicted (fourth order where the integrand is smooth: the
+ * profile is cut at every kink); the level acceleration (climb) or
+ * deceleration (descent) between the low-altitude CAS and the schedule's CAS
+ * happens at the speed-limit altitude, integrated with Simpson's rule in
+ * ACP_SPEED_CHANGE_STEPS steps of TAS from dV/dt = (T - D)/m. One function
+ * books every step's time, distance and fuel.
+ *
+ * Limits (docs/limits.md): the points and profiles refuse a mass above
+ * mass_max_takeoff or below mass_operating_empty, an altitude above
+ * max_altitude, a speed above vmo/mmo and a lift coefficient above cl_max
+ * with ACP_ERR_RANGE, naming the limit and the excess in `limit` and
+ * `limit_excess`; a profile that would burn to below the empty mass (1 kg
+ * when it is not given) stops with the same status.
  * Ground distance uses the along-track wind component: V cos(gamma) + wind.
  *
  * Aircraft keys used: engine keys, climb_cas, climb_mach, descent_cas,

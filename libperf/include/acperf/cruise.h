@@ -14,19 +14,30 @@
  *
  * Speed modes are found numerically on the full model (drag build-up,
  * compressibility, TSFC varying with Mach, idle fuel-flow floor), not from
- * the closed forms of the parabolic polar: the objective is tabulated at 48
+ * the closed forms of the parabolic polar: the objective is tabulated at 32
  * true airspeeds spaced evenly in log V over the search interval, then the
- * minimum is refined by golden-section search (Kiefer 1953) on the two grid
- * intervals around the best grid point, to a speed bracket of 1e-8 V
- * (long-range cruise: bisection of SAR - 0.99 SAR_max to 1e-10 V). The
+ * minimum is refined by Brent's method (golden section with parabolic
+ * interpolation; Brent, "Algorithms for Minimization without Derivatives",
+ * 1973, chapter 5) on the two grid intervals around the best grid point, to
+ * 1e-8 V (long-range cruise: regula falsi with the Illinois modification on
+ * SAR - 0.99 SAR_max, to a bracket of 1e-10 V; a warm start from the
+ * previous point's speed brackets the search within 2 % when it can). The
  * search interval runs from 1.2 VS1G (common practice as a lowest cruise
  * speed; CL = 1.2 when the aircraft has no cl_max) to the lowest of VMO,
  * MMO, Mach ACP_POLAR_MACH_MAX (the drag model's end) and the speed where
  * drag reaches the maximum-cruise thrust. A speed held at one of these ends
  * is reported in acp_cruise_point.limit.
  *
+ * Limits (docs/limits.md): a mass above mass_max_takeoff or below
+ * mass_operating_empty, an altitude above max_altitude, a speed above
+ * vmo/mmo or a 1 g lift coefficient above cl_max (the fixed-Mach mode below
+ * the stall) is ACP_ERR_RANGE with the limit named in the output
+ * (`limit_exceeded` of a point, `limit` of a cruise); a cruise that would
+ * burn to below the empty mass stops there. The buffet margin is reported
+ * (`buffet_margin`, a flag below ACP_BUFFET_MARGIN), not enforced.
+ *
  * Aircraft keys used: drag keys, engine keys, cruise_mach (fixed-Mach mode),
- * vmo, mmo, cl_max and max_altitude when given.
+ * vmo, mmo, cl_max, cl_buffet, the masses and max_altitude when given.
  *
  * Results are engineering estimates, not approved flight-manual data.
  */
