@@ -353,6 +353,7 @@ static void print_trip(const acp_aircraft *ac, double hp_origin) {
   acp_mission_set(m, "isa_deviation", -9.0);
   acp_mission_set(m, "wind", acp_kt_to_mps(-30.0));
   acp_mission_set(m, "cruise_mode", ACP_CRUISE_LONG_RANGE);
+  acp_mission_set(m, "descent_end_height", acp_ft_to_m(1500.0)); /* then the approach, not modelled */
   printf("== Trip: 500 NM, FL350 long-range cruise, 30 kt headwind, ISA-9, zero-fuel mass "
          "%.0f kg ==\n", zfm);
   printf("(fuel policy: typical defaults, 10 min taxi, 5 %% contingency, 30 min final reserve "
@@ -364,12 +365,19 @@ static void print_trip(const acp_aircraft *ac, double hp_origin) {
     acp_mission_free(m);
     return;
   }
-  printf("  climb   %5.1f min %6.1f NM %6.0f kg\n", t.climb_time / 60.0,
-         acp_m_to_nm(t.climb_distance), t.climb_fuel);
-  printf("  cruise  %5.1f min %6.1f NM %6.0f kg\n", t.cruise_time / 60.0,
-         acp_m_to_nm(t.cruise_distance), t.cruise_fuel);
-  printf("  descent %5.1f min %6.1f NM %6.0f kg\n", t.descent_time / 60.0,
-         acp_m_to_nm(t.descent_distance), t.descent_fuel);
+  const struct { const char *name; double time, distance, fuel; } legs[] = {
+      {"climb", t.climb_time, t.climb_distance, t.climb_fuel},
+      {"top-of-climb speed change", t.climb_acceleration_time, t.climb_acceleration_distance,
+       t.climb_acceleration_fuel},
+      {"cruise", t.cruise_time, t.cruise_distance, t.cruise_fuel},
+      {"top-of-descent deceleration", t.descent_deceleration_time, t.descent_deceleration_distance,
+       t.descent_deceleration_fuel},
+      {"descent to 1,500 ft", t.descent_time, t.descent_distance, t.descent_fuel},
+      {"deceleration to approach speed", t.approach_deceleration_time,
+       t.approach_deceleration_distance, t.approach_deceleration_fuel}};
+  for (size_t i = 0; i < sizeof legs / sizeof legs[0]; ++i)
+    printf("  %-31s %5.1f min %6.1f NM %6.0f kg\n", legs[i].name, legs[i].time / 60.0,
+           acp_m_to_nm(legs[i].distance), legs[i].fuel);
   printf("  trip fuel %.0f kg, trip time %.1f min; taxi %.0f, contingency %.0f, alternate %.0f, "
          "final reserve %.0f kg\n", t.trip_fuel, t.trip_time / 60.0, t.taxi_fuel,
          t.contingency_fuel, t.alternate_fuel, t.final_reserve_fuel);
@@ -385,8 +393,14 @@ static void print_trip(const acp_aircraft *ac, double hp_origin) {
         {"trip_time", t.trip_time / 60.0, "min"}, {"block_time", t.block_time / 60.0, "min"},
         {"takeoff_mass", t.takeoff_mass, "kg"}, {"landing_mass", t.landing_mass, "kg"},
         {"climb_distance", acp_m_to_nm(t.climb_distance), "NM"},
+        {"climb_acceleration_distance", acp_m_to_nm(t.climb_acceleration_distance), "NM"},
+        {"climb_acceleration_fuel", t.climb_acceleration_fuel, "kg"},
         {"cruise_distance", acp_m_to_nm(t.cruise_distance), "NM"},
-        {"descent_distance", acp_m_to_nm(t.descent_distance), "NM"}};
+        {"descent_deceleration_distance", acp_m_to_nm(t.descent_deceleration_distance), "NM"},
+        {"descent_deceleration_fuel", t.descent_deceleration_fuel, "kg"},
+        {"descent_distance", acp_m_to_nm(t.descent_distance), "NM"},
+        {"approach_deceleration_distance", acp_m_to_nm(t.approach_deceleration_distance), "NM"},
+        {"approach_deceleration_fuel", t.approach_deceleration_fuel, "kg"}};
     for (size_t i = 0; i < sizeof rows / sizeof rows[0]; ++i)
       fprintf(csv, "%s,%.3f,%s\n", rows[i].name, rows[i].v, rows[i].unit);
   }

@@ -625,17 +625,20 @@ static void check_trip_identities(const acp_aircraft *ac, const acp_mission *ms,
   assert_int_equal(acp_mission_get(ms, "wind", &wind), ACP_OK);
   CHECK_CLOSE(t->infeasible, ACP_TRIP_FEASIBLE, 0.0, 0.0, "feasible");
   /* six segments (mission.h): the demo jet accelerates from its climb Mach to
-     its cruise Mach at the top of climb; it descends at its cruise Mach and
-     has no approach_cas, so the other two speed changes are zero here */
-  CHECK_CLOSE(t->descent_deceleration_fuel + t->approach_deceleration_fuel, 0.0, 0.0, 0.0,
-              "no deceleration segments for the demo jet");
-  CHECK_CLOSE(t->trip_fuel, t->climb_fuel + t->climb_acceleration_fuel + t->cruise_fuel + t->descent_fuel,
-              0.0, 1e-12, "trip fuel = climb + acceleration + cruise + descent");
-  CHECK_CLOSE(t->trip_time, t->climb_time + t->climb_acceleration_time + t->cruise_time + t->descent_time,
-              0.0, 1e-12, "trip time = climb + acceleration + cruise + descent");
+     its cruise Mach at the top of climb; it descends at its cruise Mach, so it
+     does not decelerate at the top of descent; it decelerates to its
+     approach_cas at the end of the descent */
+  CHECK_CLOSE(t->descent_deceleration_fuel, 0.0, 0.0, 0.0, "no top-of-descent deceleration");
+  assert_true(t->approach_deceleration_fuel > 0.0);
+  CHECK_CLOSE(t->trip_fuel, t->climb_fuel + t->climb_acceleration_fuel + t->cruise_fuel + t->descent_fuel +
+                  t->approach_deceleration_fuel,
+              0.0, 1e-12, "trip fuel = climb + acceleration + cruise + descent + approach");
+  CHECK_CLOSE(t->trip_time, t->climb_time + t->climb_acceleration_time + t->cruise_time + t->descent_time +
+                  t->approach_deceleration_time,
+              0.0, 1e-12, "trip time = the same segments");
   CHECK_CLOSE(t->climb_distance + t->climb_acceleration_distance + t->cruise_distance +
-                  t->descent_distance,
-              dist, 1.0, 0.0, "phases cover the distance (top of descent to 1 m)");
+                  t->descent_distance + t->approach_deceleration_distance,
+              dist, 1.0, 0.0, "segments cover the distance (top of descent to 1 m)");
   CHECK_CLOSE(t->takeoff_mass - t->trip_fuel, t->landing_mass, 0.0, 1e-12, "TOW - trip = LW");
   CHECK_CLOSE(t->landing_mass - t->contingency_fuel - t->alternate_fuel - t->final_reserve_fuel,
               t->zero_fuel_mass, 0.0, 1e-12, "LW - reserves = ZFW");
@@ -670,7 +673,12 @@ static void check_trip_identities(const acp_aircraft *ac, const acp_mission *ms,
   CHECK_CLOSE(de.time, t->descent_time, 0.0, 1e-12, "descent time = acp_descent");
   CHECK_CLOSE(de.distance, t->descent_distance, 0.0, 1e-12, "descent distance = acp_descent");
   CHECK_CLOSE(de.fuel, t->descent_fuel, 0.0, 1e-12, "descent fuel = acp_descent");
-  CHECK_CLOSE(de.mass_end, t->landing_mass, 0.0, 1e-12, "landing mass");
+  acp_profile app;
+  assert_int_equal(acp_level_speed_change(ac, de.mass_end, hd, dtemp, wind, de.tas_end,
+                                          acp_cas_to_tas(key(ac, "approach_cas"), hd, dtemp), &app),
+                   ACP_OK);
+  CHECK_CLOSE(app.fuel, t->approach_deceleration_fuel, 0.0, 1e-12, "approach deceleration");
+  CHECK_CLOSE(app.mass_end, t->landing_mass, 0.0, 1e-12, "landing mass");
 }
 
 /* Fixed-Mach level cruise per metre of ground: thrust = drag, fuel flow of
@@ -740,18 +748,25 @@ static void test_trip_zero_fuel_mass_reference(void **state) {
   const ref_level top = {&climbing, FL350};
   const ref_state acc = integrate(level_rates, level_theta0, key(ac, "throttle_ratio"), &top, cl.v_end,
                                   rc.tas, 0.05, (ref_state){0.0, 0.0, cl.end.m});
+  /* and the level deceleration at idle to approach_cas at the descent's end
+     (the destination, 0 m: the mission's descent_end_height is 0) */
+  const ref_day idling = {ac, ACP_RATING_IDLE, 0.0, 0.0};
+  const ref_level bottom = {&idling, 0.0};
+  const double v_app = acp_cas_to_tas(key(ac, "approach_cas"), 0.0, 0.0);
   double m_tod = acc.m;
   ref_profile de = {.end = {0, 0, 0}};
-  ref_state cr = {0, 0, 0};
+  ref_state cr = {0, 0, 0}, app = {0, 0, 0};
   double d_prev = NAN;
   for (int pass = 0; pass < 6; ++pass) {
     de = ref_fly(ac, 1, m_tod, FL350, 0.0, 0.0, 0.0, 50.0);
-    if (fabs(de.end.x - d_prev) < 0.01) break;
-    d_prev = de.end.x;
-    cr = ref_cruise_fly(&rc, acc.m, dist - cl.end.x - acc.x - de.end.x);
+    app = integrate(level_rates, level_theta0, key(ac, "throttle_ratio"), &bottom, de.v_end, v_app,
+                    0.05, (ref_state){0.0, 0.0, de.end.m});
+    if (fabs(de.end.x + app.x - d_prev) < 0.01) break;
+    d_prev = de.end.x + app.x;
+    cr = ref_cruise_fly(&rc, acc.m, dist - cl.end.x - acc.x - de.end.x - app.x);
     m_tod = cr.m;
   }
-  assert_true(fabs(de.end.x - d_prev) < 0.01);
+  assert_true(fabs(de.end.x + app.x - d_prev) < 0.01);
   /* tolerance PROFILE_TOL: the climb's and descent's (section 1); the
      cruise's is ten times smaller (test_trip_identities) */
   int fails = 0;
@@ -762,7 +777,10 @@ static void test_trip_zero_fuel_mass_reference(void **state) {
   expect_close(&fails, t.climb_acceleration_time, acc.t, PROFILE_TOL, "top-of-climb acceleration time");
   expect_close(&fails, t.climb_acceleration_fuel, cl.end.m - acc.m, PROFILE_TOL,
                "top-of-climb acceleration fuel");
-  expect_close(&fails, t.trip_time, cl.end.t + acc.t + cr.t + de.end.t, PROFILE_TOL,
+  expect_close(&fails, t.approach_deceleration_time, app.t, PROFILE_TOL, "approach deceleration time");
+  expect_close(&fails, t.approach_deceleration_fuel, de.end.m - app.m, PROFILE_TOL,
+               "approach deceleration fuel");
+  expect_close(&fails, t.trip_time, cl.end.t + acc.t + cr.t + de.end.t + app.t, PROFILE_TOL,
                "trip time = integral");
   /* these FAIL before the fix of issue 12 (defect 1): climb and descent
      speed changes charged twice (and the cruise then starts too light) */
@@ -770,7 +788,7 @@ static void test_trip_zero_fuel_mass_reference(void **state) {
                "trip climb fuel = integral of fuel flow");
   expect_close(&fails, t.descent_fuel, m_tod - de.end.m, PROFILE_TOL,
                "trip descent fuel = integral of fuel flow");
-  expect_close(&fails, t.trip_fuel, t.takeoff_mass - de.end.m, PROFILE_TOL,
+  expect_close(&fails, t.trip_fuel, t.takeoff_mass - app.m, PROFILE_TOL,
                "trip fuel = integral of fuel flow");
   assert_int_equal(fails, 0);
 }
