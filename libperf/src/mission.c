@@ -456,13 +456,24 @@ int acp_trip_for_zero_fuel_mass(const acp_aircraft *ac, const acp_mission *missi
       return st;
     }
     const double g = out->zero_fuel_mass - zero_fuel_mass;
+    const double slope = isnan(g_prev) || g == g_prev ? 1.0 : (g - g_prev) / (tow - tow_prev);
     if (fabs(g) < ZFM_TOL) {
+      /* A zero-fuel mass asked for at a limit (the empty mass, the maximum)
+         may be met a little outside it: one more pass onto the inside, so
+         that acp_trip() at the take-off mass found flies too. */
+      const double inside = fmin(fmax(out->zero_fuel_mass, oew + 1e-3 * ZFM_TOL),
+                                 mzfw - 1e-3 * ZFM_TOL);
+      if (inside != out->zero_fuel_mass && !(mzfw - oew < 2e-3 * ZFM_TOL) && k < ZFM_ITERATIONS) {
+        tow_prev = tow;
+        g_prev = g;
+        tow += (inside - out->zero_fuel_mass) / (slope > 0.1 ? slope : 1.0);
+        continue;
+      }
       out->iterations = k;
       st = limits(ac, out, ZFM_TOL);
       if (st != ACP_OK && isnan(out->infeasible)) result_nan(out);
       return st;
     }
-    const double slope = isnan(g_prev) || g == g_prev ? 1.0 : (g - g_prev) / (tow - tow_prev);
     tow_prev = tow;
     g_prev = g;
     const double next = tow - g / (slope > 0.1 ? slope : 1.0);

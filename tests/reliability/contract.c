@@ -203,14 +203,16 @@ const acp_aircraft *contract_shared_aircraft(contract *c) {
 }
 
 /* Numeric keys a fuzzed private copy may change, with their documented
-   ranges (docs/aircraft-format.md): the values mostly land inside. */
+   ranges (docs/aircraft-format.md): every numeric aircraft-level key the
+   demo aircraft can carry, and a few component keys. */
 static const struct {
   const char *key;
   double lo, hi;
 } FUZZ_KEYS[] = {
     {"wing_area", 0.1, 5000.0}, {"span", 0.3, 150.0}, {"oswald", 0.3, 1.0},
-    {"cl_max", 0.3, 5.0}, {"cl_min_drag", -0.5, 1.5}, {"winglet_height", 0.0, 20.0},
-    {"korn_kappa", 0.7, 1.0}, {"cd_misc", 0.0, 0.1}, {"leakage_fraction", 0.0, 0.5},
+    {"cl_max", 0.3, 5.0}, {"cl_min_drag", -0.5, 1.5}, {"sweep_leading_edge", 0.0, 1.2217},
+    {"winglet_height", 0.0, 20.0}, {"korn_kappa", 0.7, 1.0}, {"wing_thickness_ratio", 0.02, 0.25},
+    {"sweep_quarter_chord", 0.0, 1.0472}, {"cd_misc", 0.0, 0.1}, {"leakage_fraction", 0.0, 0.5},
     {"engine_count", 1.0, 8.0}, {"engine_thrust", 100.0, 1.0e6}, {"throttle_ratio", 0.9, 1.3},
     {"tsfc_c0", 1e-6, 1e-3}, {"tsfc_c1", 0.0, 1e-3}, {"engine_power", 1e3, 2e7},
     {"power_lapse_exponent", 0.3, 1.5}, {"propeller_efficiency", 0.3, 0.95},
@@ -219,25 +221,52 @@ static const struct {
     {"mmo", 0.1, 0.95}, {"max_altitude", 0.0, 25000.0}, {"cl_buffet", 0.2, 2.0},
     {"speed_limit_cas", 20.0, 300.0}, {"speed_limit_altitude", -5000.0, 25000.0},
     {"climb_cas", 20.0, 300.0}, {"climb_mach", 0.05, 0.95}, {"descent_cas", 20.0, 300.0},
-    {"descent_mach", 0.05, 0.95}, {"cruise_mach", 0.05, 0.95},
-    {"mass_max_takeoff", 1.0, 1e6}, {"fuel_capacity", 0.0, 5e5},
+    {"descent_mach", 0.05, 0.95}, {"cruise_mach", 0.05, 0.95}, {"approach_cas", 20.0, 150.0},
+    {"mass_operating_empty", 1.0, 1e6}, {"mass_max_zero_fuel", 1.0, 1e6},
+    {"mass_max_landing", 1.0, 1e6}, {"mass_max_takeoff", 1.0, 1e6}, {"fuel_capacity", 0.0, 5e5},
     {"component.wing.wetted_area", 1e-4, 1e4}, {"component.wing.roughness", 0.0, 1e-3},
-    {"component.fuselage.length", 0.01, 300.0},
+    {"component.wing.thickness_ratio", 0.01, 0.4}, {"component.fuselage.length", 0.01, 300.0},
+    {"component.fuselage.fineness_ratio", 1.0, 50.0}, {"component.nacelle.interference", 1.0, 3.0},
 };
 #define NFUZZ_KEYS (sizeof FUZZ_KEYS / sizeof FUZZ_KEYS[0])
 
+/* Put the four mass limits in the order the aircraft check asks for (docs/limits.md),
+   so that a whole-range aircraft is not refused for their order alone. */
+static void sort_masses(acp_aircraft *ac) {
+  static const char *const names[4] = {"mass_operating_empty", "mass_max_zero_fuel",
+                                       "mass_max_landing", "mass_max_takeoff"};
+  double m[4];
+  for (int i = 0; i < 4; ++i) acp_aircraft_get(ac, names[i], &m[i]);
+  for (int i = 1; i < 4; ++i) /* insertion sort; NaN (not given) stays where it is */
+    for (int j = i; j > 0 && m[j - 1] > m[j]; --j) {
+      const double t = m[j];
+      m[j] = m[j - 1];
+      m[j - 1] = t;
+    }
+  for (int i = 0; i < 4; ++i)
+    if (!isnan(m[i])) acp_aircraft_set(ac, names[i], m[i]);
+}
+
+/* A copy of a demo aircraft with some keys changed, or (one in four) every key
+   of FUZZ_KEYS drawn afresh over its whole documented range, so that the
+   fuzzer reaches far from the demo aircraft and the combinations near the
+   limits (contract_range() picks the edges and just outside them too). A
+   set that the model refuses (a mass limit out of order, a winglet over half
+   the span) leaves the key as it was. */
 acp_aircraft *contract_private_aircraft(contract *c) {
   acp_aircraft *own = acp_aircraft_new();
   if (!own) return NULL;
   if (acp_aircraft_copy(own, contract_shared_aircraft(c)) != ACP_OK)
     contract_violation(c, "acp_aircraft_copy", "copy of a demo aircraft refused");
-  const unsigned nkeys = 1u + contract_pick(c, 3);
+  const int whole = contract_pick(c, 4) == 0;
+  const unsigned nkeys = whole ? (unsigned)NFUZZ_KEYS : 1u + contract_pick(c, 6);
   for (unsigned i = 0; i < nkeys; ++i) {
-    const unsigned k = contract_pick(c, (unsigned)NFUZZ_KEYS);
+    const unsigned k = whole ? i : contract_pick(c, (unsigned)NFUZZ_KEYS);
     const double v = contract_range(c, FUZZ_KEYS[k].lo, FUZZ_KEYS[k].hi);
     const int st = acp_aircraft_set(own, FUZZ_KEYS[k].key, v);
     contract_code(c, "acp_aircraft_set", st, ST(ACP_ERR_INVALID) | ST(ACP_ERR_RANGE));
   }
+  if (whole) sort_masses(own);
   return own;
 }
 
