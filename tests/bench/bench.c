@@ -100,11 +100,8 @@ __attribute__((noinline)) static void k_cruise(const arrays *a) {
     a->o1[i] = r.fuel;
   }
 }
-/* One 500 NM trip for a zero-fuel mass per call. */
-__attribute__((noinline)) static void k_trip(const arrays *a) {
-  acp_mission *m = acp_mission_new();
-  acp_mission_set(m, "distance", 926000.0);
-  acp_mission_set(m, "cruise_altitude", 10668.0);
+/* One trip of mission m for a zero-fuel mass per call; frees m. */
+static void trips(const arrays *a, acp_mission *m) {
   for (size_t i = 0; i < a->n; ++i) {
     acp_trip_result r;
     acp_trip_for_zero_fuel_mass(a->ac, m, a->mass[i] - 5000.0, &r);
@@ -113,20 +110,24 @@ __attribute__((noinline)) static void k_trip(const arrays *a) {
   acp_mission_free(m);
 }
 
+/* A mission of distance (m) at FL350. */
+static acp_mission *fl350(double distance) {
+  acp_mission *m = acp_mission_new();
+  acp_mission_set(m, "distance", distance);
+  acp_mission_set(m, "cruise_altitude", 10668.0);
+  return m;
+}
+
+/* One 500 NM trip for a zero-fuel mass per call. */
+__attribute__((noinline)) static void k_trip(const arrays *a) { trips(a, fl350(926000.0)); }
+
 /* The worst trip of issue 12's probes: long-range cruise over 3,000 km with a
    100 m cruise_step (16 s before the trip's cruise steps were bounded). */
 __attribute__((noinline)) static void k_trip_worst(const arrays *a) {
-  acp_mission *m = acp_mission_new();
-  acp_mission_set(m, "distance", 3.0e6);
-  acp_mission_set(m, "cruise_altitude", 10668.0);
+  acp_mission *m = fl350(3.0e6);
   acp_mission_set(m, "cruise_mode", ACP_CRUISE_LONG_RANGE);
   acp_mission_set(m, "cruise_step", 100.0);
-  for (size_t i = 0; i < a->n; ++i) {
-    acp_trip_result r;
-    acp_trip_for_zero_fuel_mass(a->ac, m, a->mass[i] - 5000.0, &r);
-    a->o1[i] = r.trip_fuel;
-  }
-  acp_mission_free(m);
+  trips(a, m);
 }
 
 typedef struct {
