@@ -7,7 +7,6 @@
 #include "internal.h"
 #include "performance_internal.h"
 
-#define STEPS_MAX 100000.0
 #define DISTANCE_MAX 2.0e7  /* m: half the Earth's circumference */
 #define TIME_MAX 2.0e5      /* s: about 55 h */
 #define STEP_CLIMB_MIN 100.0
@@ -164,7 +163,7 @@ static int check_args(cruise_args *a, double mass, cruise_run *r) {
   if (a->end < ACP_CRUISE_END_DISTANCE || a->end > ACP_CRUISE_END_TIME) return ACP_ERR_INVALID;
   if (!(a->end_value > 0.0) || a->step < 0.0) return ACP_ERR_INVALID;
   if (a->step == 0.0) a->step = default_step(a->end);
-  if (a->end_value / a->step > STEPS_MAX) return ACP_ERR_RANGE;
+  if (a->end_value / a->step > ACP_CRUISE_STEPS_MAX) return ACP_ERR_RANGE;
   if (a->step > a->end_value) a->step = a->end_value;
   if (a->step_climb != 0.0 && !acp_in_range(a->step_climb, STEP_CLIMB_MIN, STEP_CLIMB_MAX))
     return ACP_ERR_RANGE;

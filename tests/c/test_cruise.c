@@ -463,6 +463,14 @@ static void test_errors(void **state) {
   assert_int_equal(acp_cruise(ac, 2, 0, m, hp, 0, 0, 1, -1e5, 0, 0, &r), ACP_ERR_INVALID);
   assert_int_equal(acp_cruise(ac, 2, 0, m, hp, 0, 0, 1, 1e5, -10, 0, &r), ACP_ERR_INVALID);
   assert_int_equal(acp_cruise(ac, 2, 0, m, hp, 0, 0, 1, 1e7, 1.0, 0, &r), ACP_ERR_RANGE);
+  /* the bound on the work, at the bound: ACP_CRUISE_STEPS_MAX steps are flown
+     (fixed Mach over a fuel amount: one level-flight point per step), one
+     step more is refused before anything is integrated */
+  assert_int_equal(acp_cruise(ac, 1, 0, m, hp, 0, 0, 2, 1000.0, 1000.0 / ACP_CRUISE_STEPS_MAX, 0,
+                              &r), ACP_OK);
+  CHECK_CLOSE(r.fuel, 1000.0, 1e-6, 0.0, "the whole fuel amount in the most steps");
+  assert_int_equal(acp_cruise(ac, 1, 0, m, hp, 0, 0, 2, 1000.0, 1000.0 / (ACP_CRUISE_STEPS_MAX + 1.0),
+                              0, &r), ACP_ERR_RANGE);
   assert_int_equal(acp_cruise(ac, 2, 0, m, hp, 0, 0, 1, 1e5, 0, 50, &r), ACP_ERR_RANGE);
   assert_int_equal(acp_cruise(ac, 2, 0, m, hp, 0, 0, 2, m, 0, 0, &r), ACP_ERR_RANGE);
   assert_int_equal(acp_cruise(ac, 2, 0, m, hp, 0, 0, 1, 1e5, 0, 0, NULL), ACP_ERR_INVALID);

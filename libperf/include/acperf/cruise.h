@@ -56,6 +56,15 @@
 #define ACP_CRUISE_STEP_TIME_DEFAULT 300.0
 /** Long-range cruise: the faster speed giving this fraction of the maximum SAR (common practice). */
 #define ACP_LONG_RANGE_FRACTION 0.99
+/** Most steps of one cruise integration (end_value/step above it is ACP_ERR_RANGE): the bound
+    on its work, with at most three speed searches per step of at most ACP_CRUISE_SEARCH_MAX
+    objective evaluations each. */
+#define ACP_CRUISE_STEPS_MAX 100000.0
+/** Most objective evaluations of one cruise speed search, by construction (cruise.c): the
+    32 grid speeds, at most 200 Brent iterations, two boundary bisections to 1e-10 (35 each),
+    and for long-range cruise a walk in 2 % steps to the top of the interval (at most 100 for
+    the widest interval, VMO/1.2 VS1G below 7) and at most 200 regula-falsi iterations. */
+#define ACP_CRUISE_SEARCH_MAX 700
 /** Least climb rate at the higher level for a step climb, m/s (300 ft/min, common practice). */
 #define ACP_STEP_CLIMB_RATE_MIN 1.524
 
@@ -228,12 +237,12 @@ ACP_API size_t acp_cruise_speed_n(const acp_aircraft *ac, int mode, double cost_
  * @param end_value  ground distance (m, up to 2e7), fuel (kg, less than mass) or time (s, up to 2e5), > 0
  * @param step       step in the unit of end_value (m, kg or s), > 0, or 0 for the defaults
  *                   ACP_CRUISE_STEP_*_DEFAULT; a step longer than end_value is shortened to
- *                   it, the last step is shortened to end exactly; at most 100,000 steps
+ *                   it, the last step is shortened to end exactly; at most ACP_CRUISE_STEPS_MAX steps
  * @param step_climb step-climb height (m), 0 (none) or 100 to 3,000
  * @param out        out: totals; NaN on error
  * @return ACP_OK; ACP_ERR_INVALID (NULL, NaN/Inf, unknown mode or end,
  *         negative step or end_value <= 0, no climb schedule with step
- *         climbs); ACP_ERR_RANGE (outside the models, more than 100,000
+ *         climbs); ACP_ERR_RANGE (outside the models, more than ACP_CRUISE_STEPS_MAX
  *         steps, a fuel amount not less than the mass, a step-climb height
  *         outside 100 to 3,000 m); ACP_ERR_THRUST (level flight cannot be
  *         held at some point).
