@@ -56,13 +56,18 @@ def aircraft_block(kind):
         rows = [(k, v) for k, v in rows if k != "span"]
     elif kind == "OUT_OF_RANGE":
         rows = [(k, 1000.0 if k == "span" else v) for k, v in rows]
+    elif kind == "LOW_MACH":
+        rows = [(k, 0.3 if k == "cruise_mach" else v) for k, v in rows]
     return rows
 
 
 def write_test_workbook(path):
     air = {}
     for kind, col in C.AIRCRAFT_COLUMNS.items():
-        for r, (k, v) in enumerate(aircraft_block(kind)):
+        block = aircraft_block(kind)
+        assert len(block) <= C.AIRCRAFT_ROWS, f"{kind}: {len(block)} rows, the range has " \
+            f"{C.AIRCRAFT_ROWS}"
+        for r, (k, v) in enumerate(block):
             air[(r, col)] = k
             if v is not None:
                 air[(r, col + 1)] = v
