@@ -140,14 +140,16 @@ PROFILE_POINT = [Out("time", "min", "time min"), Out("distance", "NM", "distance
                  Out("thrust", "N", "thrust N"), Out("drag", "N", "drag N"),
                  Out("fuel_flow", "kg/h", "fuel flow kg/h"),
                  Out("acceleration_factor", None, "acceleration factor"),
-                 Out("mode", None, "mode")]
+                 Out("mode", None, "mode"), Out("limit", None, "limit"),
+                 Out("limit_excess", None, "limit excess (SI)")]
 POINT_SHOWN = ("rate", "cas", "mach", "tas", "gradient", "fuel_flow", "mode")
 TRACE_SHOWN = ("time", "distance", "hp", "mass", "cas", "mach", "tas", "rate", "fuel_flow")
 PROFILE = [Out("time", "min", "time min"), Out("distance", "NM", "distance NM"),
            Out("fuel", "kg", "fuel kg"), Out("mass_end", "kg", "end mass kg"),
            Out("tas_end", "kt", "end TAS kt"), Out("speed_change_time", "min", "speed change min"),
            Out("speed_change_distance", "NM", "speed change NM"),
-           Out("speed_change_fuel", "kg", "speed change fuel kg")]
+           Out("speed_change_fuel", "kg", "speed change fuel kg"),
+           Out("limit", None, "limit"), Out("limit_excess", None, "limit excess (SI)")]
 PROFILE_SHOWN = ("time", "distance", "fuel", "mass_end")
 CRUISE_POINT = [Out("time", "min", "time min"), Out("distance", "NM", "distance NM"),
                 Out("hp", "ft", "pressure altitude ft"), Out("mass", "kg", "mass kg"),
@@ -155,7 +157,9 @@ CRUISE_POINT = [Out("time", "min", "time min"), Out("distance", "NM", "distance 
                 Out("ground_speed", "kt", "ground speed kt"), Out("drag", "N", "drag N"),
                 Out("fuel_flow", "kg/h", "fuel flow kg/h"), Out("tsfc", None, "TSFC kg/(N s)"),
                 Out("lift_to_drag", None, "L/D"), Out("sar", "NM/t", "SAR NM/1000 kg"),
-                Out("limit", None, "limit")]
+                Out("limit", None, "limit"), Out("buffet_margin", None, "buffet margin g"),
+                Out("limit_exceeded", None, "limit exceeded"),
+                Out("limit_excess", None, "limit excess (SI)")]
 CRUISE_RESULT = [Out("time", "min", "time min"), Out("distance", "NM", "distance NM"),
                  Out("fuel", "kg", "fuel kg"), Out("mass_end", "kg", "end mass kg"),
                  Out("hp_end", "ft", "end altitude ft"),
@@ -165,18 +169,27 @@ CRUISE_RESULT = [Out("time", "min", "time min"), Out("distance", "NM", "distance
                  Out("step_climbs", None, "step climbs"),
                  Out("step_climb_time", "min", "step climb min"),
                  Out("step_climb_distance", "NM", "step climb NM"),
-                 Out("step_climb_fuel", "kg", "step climb fuel kg")]
+                 Out("step_climb_fuel", "kg", "step climb fuel kg"),
+                 Out("limit", None, "limit"), Out("limit_excess", None, "limit excess (SI)"),
+                 Out("buffet_margin_min", None, "least buffet margin g")]
+# The trip's six segments in flight order (acp_trip_result of acperf/mission.h):
+# each has a _time, _distance and _fuel field.
+TRIP_SEGMENTS = ("climb", "climb_acceleration", "cruise", "descent_deceleration", "descent",
+                 "approach_deceleration")
 _TRIP_UNITS = {"infeasible": None, "excess": None, "trip_time": "min", "block_time": "min",
-               "climb_time": "min", "cruise_time": "min", "descent_time": "min",
-               "climb_distance": "NM", "cruise_distance": "NM", "descent_distance": "NM",
                "cruise_altitude_end": "ft", "cruise_sar_mean": "NM/t", "iterations": None}
+_TRIP_UNITS.update({f"{s}_{q}": u for s in TRIP_SEGMENTS
+                    for q, u in (("time", "min"), ("distance", "NM"), ("fuel", "kg"))})
 TRIP = [Out(f, _TRIP_UNITS.get(f, "kg"), f.replace("_", " ")) for f in (
     "infeasible", "excess", "takeoff_mass", "landing_mass", "zero_fuel_mass", "ramp_mass",
     "trip_fuel", "taxi_fuel", "contingency_fuel", "alternate_fuel", "final_reserve_fuel",
     "block_fuel", "takeoff_fuel", "trip_time", "block_time", "climb_time", "climb_distance",
     "climb_fuel", "cruise_time", "cruise_distance", "cruise_fuel", "descent_time",
     "descent_distance", "descent_fuel", "top_of_climb_mass", "top_of_descent_mass",
-    "cruise_altitude_end", "cruise_sar_mean", "iterations")]
+    "cruise_altitude_end", "cruise_sar_mean", "iterations", "climb_acceleration_time",
+    "climb_acceleration_distance", "climb_acceleration_fuel", "descent_deceleration_time",
+    "descent_deceleration_distance", "descent_deceleration_fuel", "approach_deceleration_time",
+    "approach_deceleration_distance", "approach_deceleration_fuel")]
 
 # Cruise speed modes by name (enum acp_cruise_mode of acperf/cruise.h).
 CRUISE_MODES = {"fixed_mach": 1, "max_range": 2, "long_range": 3, "economy": 4,
@@ -202,7 +215,7 @@ MISSION_KEYS = {
     "cost_index": None, "step_climb": "ft", "climb_step": "ft", "cruise_step": "NM",
     "taxi_time": "min", "taxi_fuel": "kg", "contingency_fraction": None,
     "contingency_minimum": "kg", "alternate_fuel": "kg", "final_reserve_time": "min",
-    "holding_height": "ft"}
+    "holding_height": "ft", "descent_end_height": "ft"}
 
 # Why a trip is infeasible (enum acp_trip_infeasible of acperf/mission.h), for
 # ACP_TRIP_STATUS: the text and the unit of the excess.
@@ -211,12 +224,15 @@ TRIP_INFEASIBLE = {
     2: ("landing mass above mass_max_landing", "kg"),
     3: ("block fuel above fuel_capacity", "kg"),
     4: ("zero-fuel mass above mass_max_zero_fuel", "kg"),
-    5: ("distance shorter than the climb and descent", "NM"),
+    5: ("distance shorter than the segments other than the cruise", "NM"),
     6: ("cruise altitude above max_altitude", "ft"),
     7: ("the cruise altitude cannot be reached", None),
     8: ("level flight cannot be held in cruise or holding", None),
     9: ("cruise altitude not above the origin and destination", "ft"),
-    10: ("the fuel needed exceeds the mass available", "kg")}
+    10: ("the fuel needed exceeds the mass available", "kg"),
+    11: ("a take-off or zero-fuel mass below mass_operating_empty", "kg"),
+    # the excess is a lift coefficient, no unit of acp_from_si: not shown
+    12: ("the cruise speed is below the 1 g stall (lift coefficient above cl_max)", None)}
 
 
 FUNCTIONS = [
@@ -433,13 +449,20 @@ FUNCTIONS = [
        "Ceilings at a mass (kg) and ISA deviation (degC), pressure altitudes in ft: one row "
        "of service ceiling (100 ft/min), maximum climb altitude (300 ft/min), 1.3 g buffet "
        "margin altitude at the cruise Mach, maximum cruise altitude and optimum altitude "
-       "(greatest specific air range at the cruise Mach); #NUM! where none below 82,000 ft.",
+       "(greatest specific air range at the cruise Mach; it may lie above the maximum cruise "
+       "altitude); #NUM! where none below 82,000 ft.",
        aircraft=True, args=[MASS, DEV],
        outputs=[Out("service_ceiling", "ft", "service ceiling ft"),
                 Out("max_climb_altitude", "ft", "max climb altitude ft"),
                 Out("buffet_altitude", "ft", "buffet 1.3 g altitude ft"),
                 Out("max_cruise_altitude", "ft", "max cruise altitude ft"),
-                Out("optimum_altitude", "ft", "optimum altitude ft")], search=True),
+                Out("optimum_altitude", "ft", "optimum altitude ft"),
+                Out("optimum_limit", None, "optimum limit"),
+                Out("best_cruise_altitude", "ft", "best cruise altitude ft"),
+                Out("best_cruise_limit", None, "best cruise limit"),
+                Out("max_cruise_limit", None, "max cruise limit")],
+       pick=("service_ceiling", "max_climb_altitude", "buffet_altitude", "max_cruise_altitude",
+             "optimum_altitude"), search=True),
 
     # ---- cruise ------------------------------------------------------------
     Fn("ACP_SAR", "out", "acp_specific_air_range",
@@ -490,6 +513,16 @@ FUNCTIONS = [
        aircraft=True, mission=True, args=[ZFM], outputs=TRIP,
        pick=("trip_fuel", "block_fuel", "trip_time", "block_time", "takeoff_mass",
              "landing_mass"), search=True),
+    Fn("ACP_TRIP_SEGMENTS", "struct", "acp_trip_for_zero_fuel_mass",
+       "The trip of ACP_TRIP_FUEL segment by segment, in flight order: one row of the fuel "
+       "(kg) of the climb, the level acceleration to the cruise speed at the top of climb, "
+       "the cruise, the deceleration to the descent speed at the top of descent (0 when the "
+       "descent is not slower), the descent to the destination plus descent_end_height, and "
+       "the deceleration there to the aircraft's approach_cas (0 without it). The six add "
+       "up to the trip fuel. An infeasible trip is #NUM! in every cell; ACP_TRIP_STATUS says "
+       "why.",
+       aircraft=True, mission=True, args=[ZFM], outputs=TRIP,
+       pick=tuple(s + "_fuel" for s in TRIP_SEGMENTS), search=True),
     Fn("ACP_TRIP_STATUS", "status", "acp_trip_for_zero_fuel_mass",
        "\"OK\" when the trip of ACP_TRIP_FUEL is feasible, else why not, as text (e.g. "
        "take-off mass above mass_max_takeoff by 1234 kg; an invalid aircraft or mission "

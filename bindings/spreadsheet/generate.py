@@ -159,6 +159,42 @@ def parse_headers(paths):
     return protos
 
 
+STRUCT = re.compile(r"typedef\s+struct\s*\{([^}]*)\}\s*(\w+)\s*;", re.S)
+
+
+def parse_structs(paths):
+    """{struct name: [field names]} for every output struct of doubles of the headers
+    (a struct with any other member type is left out)."""
+    structs = {}
+    for path in paths:
+        with open(path) as f:
+            src = re.sub(r"/\*.*?\*/", " ", f.read(), flags=re.S)
+        for body, name in STRUCT.findall(src):
+            decls = [" ".join(d.split()) for d in body.split(";") if d.strip()]
+            if all(d.startswith("double ") for d in decls):
+                structs[name] = [n.strip() for d in decls for n in d[len("double "):].split(",")]
+    return structs
+
+
+def check_outputs(protos, structs):
+    """Every struct output list of the table is the C struct's fields in order: the VBA
+    wrappers size their buffers (and step through trace points) by its length."""
+    by_name = {name: params for _, name, params in protos}
+    for fn in T.FUNCTIONS:
+        if fn.kind not in ("struct", "status", "trace"):
+            continue
+        types = [t.replace("const ", "").rstrip("*") for t, _ in by_name[fn.call]]
+        types = [t for t in types if t in structs]
+        lists = [fn.outputs] + ([fn.totals] if fn.kind == "trace" else [])
+        if fn.kind != "trace":
+            types = types[-1:]
+        for outs, ctype in zip(lists, types):
+            got = [o.field for o in outs]
+            if got != structs[ctype]:
+                raise SystemExit(f"{fn.name}: outputs {got} are not the fields of {ctype} "
+                                 f"{structs[ctype]}")
+
+
 # ---------------------------------------------------------------- VBA ---------
 def vba_param(ctype, name):
     n = "p_" + name
@@ -206,6 +242,7 @@ def write_vba(out, headers):
         L.append(f"Private Declare PtrSafe {kind} c_{name} Lib \"{T.DLL_NAME}\" Alias \"{name}\""
                  f" ({ps}){vba_return(ret)}")
     have = {name for _, name, _ in protos}
+    check_outputs(protos, parse_structs(headers))
     for fn in T.FUNCTIONS:
         for needed in [fn.call] + (["acp_aircraft_new", "acp_aircraft_set"] if fn.aircraft else []) \
                 + (["acp_mission_new", "acp_mission_set"] if fn.mission else []):

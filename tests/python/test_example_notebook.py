@@ -45,6 +45,8 @@ print(%r + json.dumps({
     "winglet_height_as_flown": ac["winglet_height"],
     "key_figures": key_figures,
     "what_if": what_if.to_dict(orient="index"),
+    "phases": [[i] + [float(x) for x in row] for i, row in zip(phases.index, phases.values)],
+    "phases_columns": list(phases.columns),
 }))
 """ % MARK
 
@@ -130,6 +132,37 @@ def test_key_figures_match_the_binding(report):
     trip = acperf.trip_for_zero_fuel_mass(ac, mission, report["ZERO_FUEL_MASS"])
     assert close(k["500 NM trip fuel (kg)"], trip.trip_fuel)
     assert close(k["500 NM block fuel (kg)"], trip.block_fuel)
+
+
+# The trip's segments in flight order, as acperf/mission.h lists them in acp_trip_result.
+SEGMENTS = ("climb", "climb_acceleration", "cruise", "descent_deceleration", "descent",
+            "approach_deceleration")
+
+
+def test_trip_table_is_the_six_segments_and_sums_to_the_trip(report):
+    """Each row of the notebook's trip table is one segment of a direct binding call
+    (1e-12); the sum row is the trip by bookkeeping (mission.h: trip fuel = the sum of
+    the six segments' fuel = take-off mass - landing mass), to 1e-9 for the rounding of
+    six sums; the segments' distances make up the 500 NM to 1 m."""
+    assert report["phases_columns"] == ["time (min)", "distance (NM)", "fuel (kg)"]
+    rows = report["phases"]
+    assert len(rows) == len(SEGMENTS) + 1 and rows[-1][0] == "trip"
+    ac = acperf.Aircraft.from_file(AIRCRAFT)
+    mission = acperf.Mission(distance=units.nm_to_m(500.0), cruise_altitude=report["HP"])
+    trip = acperf.trip_for_zero_fuel_mass(ac, mission, report["ZERO_FUEL_MASS"])
+    for (label, t, d, f), seg in zip(rows, SEGMENTS):   # close() takes 0 == 0 as well
+        assert close(t, getattr(trip, seg + "_time") / 60.0), label
+        assert close(d, units.m_to_nm(getattr(trip, seg + "_distance"))), label
+        assert close(f, getattr(trip, seg + "_fuel")), label
+    # the speed changes are flown on this sector (approach_cas is set on the demo jet)
+    assert rows[1][3] > 0.0 and rows[5][3] > 0.0
+    _, time, distance, fuel = rows[-1]
+    assert close(fuel, trip.trip_fuel, 1e-9)
+    assert close(fuel, trip.takeoff_mass - trip.landing_mass, 1e-9)
+    assert close(time, trip.trip_time / 60.0, 1e-9)
+    # the top of descent settles when the segments cover the distance to 1 m
+    # (docs/methods/trip.md, "Bookkeeping")
+    assert abs(units.nm_to_m(distance) - units.nm_to_m(500.0)) <= 1.0
 
 
 def test_what_if_variants_changed_the_copies_only(report):

@@ -19,13 +19,18 @@ ROOT = os.path.normpath(os.path.join(os.path.dirname(os.path.abspath(__file__)),
 RJ_FILE = os.path.join(ROOT, "examples", "aircraft", "regional_jet.toml")
 TWIN_FILE = os.path.join(ROOT, "examples", "aircraft", "light_twin.toml")
 
-# Aircraft ranges on the sheet "Aircraft" (columns; rows 1..60, spare rows blank).
+# Aircraft ranges on the sheet "Aircraft" (two columns each; rows 1..AIRCRAFT_ROWS, spare rows
+# blank). The whole aircraft file must fit: calc_headless.py stops if a range would cut it.
+AIRCRAFT_ROWS = 100
 AIRCRAFT_COLUMNS = {"RJ": 0, "TWIN": 3, "BLANK_VALUE": 6, "TEXT_VALUE": 9, "UNKNOWN_KEY": 12,
-                    "INCOMPLETE": 15, "OUT_OF_RANGE": 18}
-RJ, TWIN = Ref("Aircraft", "A1:B60"), Ref("Aircraft", "D1:E60")
-BLANK_VALUE, TEXT_VALUE = Ref("Aircraft", "G1:H60"), Ref("Aircraft", "J1:K60")
-UNKNOWN_KEY, INCOMPLETE = Ref("Aircraft", "M1:N60"), Ref("Aircraft", "P1:Q60")
-OUT_OF_RANGE = Ref("Aircraft", "S1:T60")
+                    "INCOMPLETE": 15, "OUT_OF_RANGE": 18, "LOW_MACH": 21}
+_AIR = {k: Ref("Aircraft", f"{_c(c)}1:{_c(c + 1)}{AIRCRAFT_ROWS}")
+        for k, c in AIRCRAFT_COLUMNS.items()}
+RJ, TWIN = _AIR["RJ"], _AIR["TWIN"]
+BLANK_VALUE, TEXT_VALUE = _AIR["BLANK_VALUE"], _AIR["TEXT_VALUE"]
+UNKNOWN_KEY, INCOMPLETE = _AIR["UNKNOWN_KEY"], _AIR["INCOMPLETE"]
+OUT_OF_RANGE = _AIR["OUT_OF_RANGE"]
+LOW_MACH = _AIR["LOW_MACH"]   # the regional jet with cruise_mach 0.3: below the stall high up
 # Sheet "Inputs": A1:A6 altitudes (ft), B1 blank, C1 text, D1:D3 CAS (kt), E1:F2 a 2x2 block.
 HP_COLUMN, BLANK, TEXT = Ref("Inputs", "A1:A6"), Ref("Inputs", "B1:B1"), Ref("Inputs", "C1")
 CAS_COLUMN, BLOCK = Ref("Inputs", "D1:D3"), Ref("Inputs", "E1:F2")
@@ -47,6 +52,13 @@ MISSIONS = {
     "MUNKNOWN": [("distance", 500.0), ("cruise_altitude", 35000.0), ("route_name", 3.0)],
     "MNODIST": [("cruise_altitude", 35000.0)],
     "TWIN300": [("distance", 300.0), ("cruise_altitude", 18000.0)],
+    "MEND": [("distance", 500.0), ("cruise_altitude", 33000.0), ("origin_altitude", 1200.0),
+             ("descent_end_height", 1500.0), ("wind", 25.0)],
+    "MEND3000": [("distance", 500.0), ("cruise_altitude", 35000.0), ("cruise_mode", "long_range"),
+                 ("descent_end_height", 9800.0)],
+    "MENDHIGH": [("distance", 500.0), ("cruise_altitude", 35000.0),
+                 ("descent_end_height", 10000.0)],   # above 3,000 m: rejected
+    "M25000": [("distance", 500.0), ("cruise_altitude", 25000.0)],
 }
 MISSION_COLUMNS = {k: 3 * i for i, k in enumerate(MISSIONS)}
 MISSION = {k: Ref("Mission", f"{_c(c)}1:{_c(c + 1)}20") for k, c in MISSION_COLUMNS.items()}
@@ -153,4 +165,22 @@ CASES = [
     ("ACP_TRIP_FUEL", [TWIN, MISSION["TWIN300"], 4300.0]),
     ("ACP_TRIP_FUEL", [RJ, MISSION["M500"], TEXT]), ("ACP_TRIP_FUEL", [INCOMPLETE, MISSION["M500"], 30000.0]),
     ("ACP_TRIP_STATUS", [INCOMPLETE, MISSION["M500"], 30000.0]),
+    ("ACP_TRIP_FUEL", [RJ, MISSION["MEND"], 31000.0]), ("ACP_TRIP_FUEL", [RJ, MISSION["MEND3000"], 30000.0]),
+    ("ACP_TRIP_FUEL", [RJ, MISSION["MENDHIGH"], 30000.0]),
+    ("ACP_TRIP_STATUS", [RJ, MISSION["MENDHIGH"], 30000.0]),
+    ("ACP_TRIP_STATUS", [RJ, MISSION["M500"], 15000.0]),      # zero-fuel mass below operating empty
+    ("ACP_TRIP_FUEL", [LOW_MACH, MISSION["M25000"], 30000.0]),
+    ("ACP_TRIP_STATUS", [LOW_MACH, MISSION["M25000"], 30000.0]),   # fixed Mach 0.3 below the stall
+    # the six segments: climb, top-of-climb acceleration, cruise, top-of-descent deceleration,
+    # descent, deceleration to approach_cas
+    ("ACP_TRIP_SEGMENTS", [RJ, MISSION["M500"], 30000.0]),
+    ("ACP_TRIP_SEGMENTS", [RJ, MISSION["MWIND"], 31000.0]),
+    ("ACP_TRIP_SEGMENTS", [RJ, MISSION["MEND"], 31000.0]),
+    ("ACP_TRIP_SEGMENTS", [RJ, MISSION["MEND3000"], 30000.0]),
+    ("ACP_TRIP_SEGMENTS", [TWIN, MISSION["TWIN300"], 4300.0]),
+    ("ACP_TRIP_SEGMENTS", [RJ, MISSION["M500"], 36000.0]),     # infeasible: #NUM! in every cell
+    ("ACP_TRIP_SEGMENTS", [RJ, MISSION["MSHORT"], 30000.0]),
+    ("ACP_TRIP_SEGMENTS", [RJ, MISSION["MENDHIGH"], 30000.0]),  # invalid mission: #VALUE!
+    ("ACP_TRIP_SEGMENTS", [RJ, MISSION["M500"], BLANK]),
+    ("ACP_TRIP_SEGMENTS", [LOW_MACH, MISSION["M25000"], 30000.0]),
 ]

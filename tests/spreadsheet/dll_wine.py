@@ -66,6 +66,10 @@ def main():
             if rows is None or not all(k in T.MISSION_KEYS and isinstance(v, float)
                                        for k, v in rows):
                 continue   # bad mission ranges are the VBA wrapper's business
+            try:
+                R.mission(rows)
+            except R.Invalid:
+                continue   # so is a value the library rejects (the wrapper's #VALUE!)
         nums, texts = args[nr:nr + len(fn.args)], args[nr + len(fn.args):]
         if not all(isinstance(x, float) for x in nums):
             continue  # ranges and text are the VBA wrapper's business, not the DLL's

@@ -183,7 +183,7 @@ MISSION_UNITS = {"distance": u.nm_to_m, "cruise_altitude": ft, "origin_altitude"
                  "cruise_step": u.nm_to_m, "taxi_time": lambda x: x * u.MINUTE,
                  "taxi_fuel": float, "contingency_fraction": float, "contingency_minimum": float,
                  "alternate_fuel": float, "final_reserve_time": lambda x: x * u.MINUTE,
-                 "holding_height": ft}
+                 "holding_height": ft, "descent_end_height": ft}
 
 
 def mission(rows):
@@ -212,22 +212,33 @@ def trip(ac, mi, zfm):
             r.landing_mass]
 
 
+def trip_segments(ac, mi, zfm):
+    """Fuel (kg) of the six segments in flight order (acperf/mission.h, acp_trip_result)."""
+    r = acperf.trip_for_zero_fuel_mass(ac, mi, zfm)
+    return [r.climb_fuel, r.climb_acceleration_fuel, r.cruise_fuel, r.descent_deceleration_fuel,
+            r.descent_fuel, r.approach_deceleration_fuel]
+
+
 # Why a trip is infeasible, in the words of docs/spreadsheet.md (code: text, unit of excess).
 REASONS = {1: ("take-off mass above mass_max_takeoff", "kg"),
            2: ("landing mass above mass_max_landing", "kg"),
            3: ("block fuel above fuel_capacity", "kg"),
            4: ("zero-fuel mass above mass_max_zero_fuel", "kg"),
-           5: ("distance shorter than the climb and descent", "NM"),
+           5: ("distance shorter than the segments other than the cruise", "NM"),
            6: ("cruise altitude above max_altitude", "ft"),
            7: ("the cruise altitude cannot be reached", None),
            8: ("level flight cannot be held in cruise or holding", None),
            9: ("cruise altitude not above the origin and destination", "ft"),
-           10: ("the fuel needed exceeds the mass available", "kg")}
+           10: ("the fuel needed exceeds the mass available", "kg"),
+           11: ("a take-off or zero-fuel mass below mass_operating_empty", "kg"),
+           12: ("the cruise speed is below the 1 g stall (lift coefficient above cl_max)", None)}
 
 
 def trip_status(ac, mi, zfm):
+    # The Python function (__wrapped__, docs/python.md): its AcperfError carries the
+    # trip as .result; the C fast path's error does not, which would leave only NOT_OK.
     try:
-        acperf.trip_for_zero_fuel_mass(ac, mi, zfm)
+        acperf.trip_for_zero_fuel_mass.__wrapped__(ac, mi, zfm)
         return "OK"
     except acperf.AcperfError as e:
         r = getattr(e, "result", None)
@@ -287,13 +298,15 @@ REFERENCE = {
     "ACP_CRUISE": (True, cruise),
     "ACP_BREGUET_RANGE": (False, breguet),
     "ACP_TRIP_FUEL": (2, trip),
+    "ACP_TRIP_SEGMENTS": (2, trip_segments),
     "ACP_TRIP_STATUS": (2, trip_status),
 }
 TEXT_ARGS = {"ACP_CONVERT": 2, "ACP_AIRCRAFT_VALUE": 1, "ACP_CRUISE_SPEED": 1, "ACP_CRUISE": 1}
 TABLES = {"ACP_CLIMB_TRACE", "ACP_DESCENT_TRACE"}     # one row per point, single arguments
 WIDTH = {"ACP_ISA": 6, "ACP_DRAG": 7, "ACP_WIND_TRIANGLE": 3, "ACP_SPEED_SCHEDULE": 6,
          "ACP_CLIMB_POINT": 7, "ACP_DESCENT_POINT": 7, "ACP_CLIMB": 4, "ACP_DESCENT": 4,
-         "ACP_CEILINGS": 5, "ACP_CRUISE_SPEED": 6, "ACP_CRUISE": 4, "ACP_TRIP_FUEL": 6}
+         "ACP_CEILINGS": 5, "ACP_CRUISE_SPEED": 6, "ACP_CRUISE": 4, "ACP_TRIP_FUEL": 6,
+         "ACP_TRIP_SEGMENTS": 6}
 
 
 def _num(x):
