@@ -348,7 +348,7 @@ static int check_args(const acp_aircraft *ac, double mass, double h0, double h1,
     return ACP_ERR_INVALID;
   if (perf_check(ac, NULL, 0) != ACP_OK) return ACP_ERR_INVALID;
   if (*step == 0.0) *step = ACP_CLIMB_STEP_DEFAULT;
-  if (!acp_in_range(*step, 10.0, 1000.0) || !acp_in_range(mass, ACP_POLAR_MASS_MIN, ACP_POLAR_MASS_MAX) ||
+  if (!acp_in_range(*step, ACP_CLIMB_STEP_MIN, ACP_CLIMB_STEP_MAX) || !acp_in_range(mass, ACP_POLAR_MASS_MIN, ACP_POLAR_MASS_MAX) ||
       !acp_in_range(wind, -WIND_MAX, WIND_MAX))
     return ACP_ERR_RANGE;
   acp_atmos at;

@@ -157,6 +157,27 @@ static void test_ceilings(void **state) {
   assert_true(heavy.service_ceiling < cs.service_ceiling && heavy.buffet_altitude < cs.buffet_altitude);
 }
 
+/* The bound on a climb's work, at the bound: the least step over the whole
+   altitude range of the model below max_altitude (the trace's count is known
+   before integrating: 1 + ceil(span/step) + cuts + the speed change), and the
+   next double below it refused. */
+static void test_work_bound(void **state) {
+  const acp_aircraft *ac = *state;
+  acp_profile p;
+  size_t need = 0;
+  const double top = 11000.0;
+  assert_int_equal(acp_climb_trace(ac, 30000.0, 0.0, top, 0, 0, ACP_CLIMB_STEP_MIN, 0, NULL, &need, &p),
+                   ACP_ERR_RANGE);
+  assert_true(need >= 1 + (size_t)(top / ACP_CLIMB_STEP_MIN) &&
+              need <= 1 + (size_t)(top / ACP_CLIMB_STEP_MIN) + 4 + ACP_SPEED_CHANGE_STEPS);
+  assert_int_equal(acp_climb(ac, 30000.0, 0.0, top, 0, 0, ACP_CLIMB_STEP_MIN, &p), ACP_OK);
+  assert_int_equal(acp_climb(ac, 30000.0, 0.0, top, 0, 0, nextafter(ACP_CLIMB_STEP_MIN, 0.0), &p),
+                   ACP_ERR_RANGE);
+  assert_int_equal(acp_climb(ac, 30000.0, 0.0, top, 0, 0, ACP_CLIMB_STEP_MAX, &p), ACP_OK);
+  assert_int_equal(acp_climb(ac, 30000.0, 0.0, top, 0, 0, nextafter(ACP_CLIMB_STEP_MAX, 2e3), &p),
+                   ACP_ERR_RANGE);
+}
+
 static void test_errors(void **state) {
   const acp_aircraft *ac = *state;
   acp_profile p;
@@ -323,6 +344,7 @@ int main(void) {
       cmocka_unit_test(test_rules_of_thumb), cmocka_unit_test(test_points),
       cmocka_unit_test(test_ceilings), cmocka_unit_test(test_errors),
       cmocka_unit_test(test_turboprop), cmocka_unit_test(test_level_speed_change),
+      cmocka_unit_test(test_work_bound),
   };
   return cmocka_run_group_tests(tests, setup, teardown);
 }
