@@ -424,8 +424,9 @@ int acp_cruise_speed(const acp_aircraft *ac, int mode, double cost_index, double
   if (!out) return ACP_ERR_INVALID;
   cruise_point_nan(out);
   int st = cruise_check(ac, mode, cost_index, mass, wind);
+  if (st != ACP_OK) return st;
   cruise_cond c;
-  if (st == ACP_OK) st = cruise_cond_at(&c, ac, hp, dtemp, wind);
+  st = cruise_cond_at(&c, ac, hp, dtemp, wind);
   if (st == ACP_OK) st = cruise_envelope(&c, mass, out);
   return st == ACP_OK ? cruise_speed_at(&c, mode, cost_index, mass, NULL, out) : st;
 }

@@ -236,6 +236,7 @@ static int climb_up(const acp_aircraft *ac, const acp_mission *ms, double tow, a
   if (st != ACP_OK) return segment_error(o, st, l->climb.limit, l->climb.limit_excess);
   cruise_cond c;
   acp_cruise_point p;
+  cruise_point_nan(&p);
   st = cruise_cond_at(&c, ac, hc, dtemp, wind);
   if (st == ACP_OK)
     st = cruise_speed_at(&c, (int)v[MK_CRUISE_MODE], v[MK_COST_INDEX], l->climb.mass_end, NULL, &p);
