@@ -123,6 +123,151 @@ static void speeds_nan(acp_speed_set *out) {
 
 static int first_error(int a, int b) { return a != ACP_OK ? a : b; }
 
+/* ---- the drag-curve search of acp_speeds (acperf/speeds.h) ------------------
+
+   In level flight D(V) = A(V) V^2 + b/V^2 + c exactly, with the induced drag's
+   b = 2 k W^2/(rho S) and c = -2 k W CL0 known and A(V) = q S (CD0 + CDw + k
+   CL0^2)/V^2 (so A is constant for a parabolic polar). Each speed minimises
+   D V^n (n = 0 VMD, 1 VMP, -1 VMR): V D' + n D = 0. The drag evaluations give
+   A at their speeds; ln A, a slowly varying function of u = ln V, is
+   interpolated by the quadratic through the three evaluations nearest the
+   speed sought, and the stationary point of the interpolated D V^n is solved
+   by Newton's method (arithmetic only); the drag is then evaluated there. For
+   constant A the first step is the parabolic polar's closed form. */
+
+#define FAST_STEPS ACP_SPEEDS_FAST_STEPS
+#define FAST_TOL 1e-7  /* a speed is found when the next step is below this, relative */
+#define FAST_CL 0.6    /* the first evaluation: at this lift coefficient */
+#define NEWTON_MAX 30  /* Newton steps on the interpolated curve, at most */
+#define SAMPLES_MAX (1 + 3 * FAST_STEPS)
+
+typedef struct {
+  double u, r, drag; /* ln V, ln A(V), D(V) */
+} sample;
+
+typedef struct {
+  const search *s;
+  double b, c;
+  double ulo, uhi; /* ln V inside which the tabulated search would find the same minimum */
+  sample pt[SAMPLES_MAX];
+  int n;
+} curve;
+
+/* Evaluate the drag at u = ln V and keep it; 0 when it cannot be had. */
+static int curve_add(curve *cv, double u) {
+  if (cv->n >= SAMPLES_MAX) return 0;
+  const double v = exp(u), x = v * v;
+  const double d = polar_drag(cv->s->ac, &cv->s->atm, cv->s->weight, v);
+  const double a = (d - cv->b / x - cv->c) / x;
+  if (!(a > 0.0) || !isfinite(a)) return 0;
+  cv->pt[cv->n++] = (sample){u, log(a), d};
+  return 1;
+}
+
+/* The quadratic through the (up to) three evaluations nearest u0: ln A(u) ~
+   r0 + f1 (u - u0') + f2 (u - u0')(u - u1'). */
+typedef struct {
+  double u0, u1, r0, f1, f2;
+} quad;
+
+static quad curve_quad(const curve *cv, double u0) {
+  int idx[3] = {-1, -1, -1};
+  for (int k = 0; k < 3 && (k == 0 || idx[k - 1] >= 0); ++k)
+    for (int i = 0; i < cv->n; ++i) {
+      int distinct = 1;
+      for (int j = 0; j < k; ++j)
+        if (idx[j] == i || fabs(cv->pt[i].u - cv->pt[idx[j]].u) < 1e-9) distinct = 0;
+      if (distinct && (idx[k] < 0 || fabs(cv->pt[i].u - u0) < fabs(cv->pt[idx[k]].u - u0)))
+        idx[k] = i;
+    }
+  const sample *p0 = &cv->pt[idx[0]];
+  quad q = {p0->u, p0->u, p0->r, 0.0, 0.0};
+  if (idx[1] < 0) return q;
+  const sample *p1 = &cv->pt[idx[1]];
+  q.u1 = p1->u;
+  q.f1 = (p1->r - p0->r) / (p1->u - p0->u);
+  if (idx[2] < 0) return q;
+  const sample *p2 = &cv->pt[idx[2]];
+  const double f12 = (p2->r - p1->r) / (p2->u - p1->u);
+  q.f2 = (f12 - q.f1) / (p2->u - p0->u);
+  return q;
+}
+
+/* The stationary point of the interpolated D V^n near u: Newton's method on
+   h(u) = (2 + n + p') A V^2 - (2 - n) b/V^2 + n c, the derivative of the
+   interpolated curve times V (times V^-n). NaN when it does not settle. */
+static double curve_solve(const curve *cv, double n, double u) {
+  const quad q = curve_quad(cv, u);
+  for (int it = 0; it < NEWTON_MAX; ++it) {
+    const double p = q.r0 + (u - q.u0) * (q.f1 + q.f2 * (u - q.u1));
+    const double dp = q.f1 + q.f2 * (2.0 * u - q.u0 - q.u1), ddp = 2.0 * q.f2;
+    const double av2 = exp(p + 2.0 * u), bv2 = (2.0 - n) * cv->b * exp(-2.0 * u);
+    const double h = (2.0 + n + dp) * av2 - bv2 + n * cv->c;
+    const double dh = (ddp + (2.0 + n + dp) * (2.0 + dp)) * av2 + 2.0 * bv2;
+    if (!(dh > 0.0)) return ACP_NAN;
+    const double step = fmax(-0.5, fmin(0.5, h / dh));
+    u -= step;
+    if (fabs(step) < 1e-13) return u;
+  }
+  return ACP_NAN;
+}
+
+/* One speed (objective D V^n) by the interpolated search from u; ACP_OK with
+   *v (and the drag there, *drag, when the speed is an evaluated one), or
+   ACP_ERR_NO_CONVERGENCE for the tabulated search to decide. */
+static int curve_speed(curve *cv, double n, double u, double *v, double *drag) {
+  for (int k = 0; k < FAST_STEPS; ++k) {
+    const double next = curve_solve(cv, n, u);
+    if (!(next > cv->ulo && next < cv->uhi)) break;
+    if (k > 0 && fabs(next - u) < FAST_TOL) {
+      /* VMD the evaluated speed, for L/D max = W/D(VMD) exactly at it */
+      *v = exp(n == 0.0 ? u : next);
+      *drag = n == 0.0 ? cv->pt[cv->n - 1].drag : ACP_NAN;
+      return ACP_OK;
+    }
+    if (!curve_add(cv, next)) break;
+    u = next;
+  }
+  return ACP_ERR_NO_CONVERGENCE;
+}
+
+/* The three speeds of acp_speeds (and VMD alone when vmp and vmr are NULL), each
+   by the interpolated search or, when that fails, by the tabulated one; the
+   drag at VMD in *d_vmd. */
+static int find_speeds(const search *s, double *vmd, double *d_vmd, double *vmp, double *vmr) {
+  const acp_aircraft *ac = s->ac;
+  const double k = ac->induced_factor, cl0 = ac_value(ac, AK_CL_MIN_DRAG);
+  const double ratio = grid_ratio(s);
+  curve cv;
+  cv.s = s;
+  cv.b = 2.0 * k * s->weight * s->weight / (s->atm.density * ac->v[AK_WING_AREA]);
+  cv.c = -2.0 * k * s->weight * cl0;
+  cv.ulo = log(s->vlo * ratio);
+  cv.uhi = log(s->vhi / ratio);
+  cv.n = 0;
+  const double u0 = 0.5 * log(2.0 * s->weight / (s->atm.density * ac->v[AK_WING_AREA] * FAST_CL));
+  const int ok0 = curve_add(&cv, fmax(cv.ulo, fmin(cv.uhi, u0)));
+  double *const out[3] = {vmd, vmp, vmr};
+  static const double power[3] = {0.0, 1.0, -1.0};
+  static const enum objective obj[3] = {OBJ_DRAG, OBJ_POWER, OBJ_RANGE};
+  double drag[GRID];
+  int tabulated = 0, st = ACP_OK;
+  *d_vmd = ACP_NAN;
+  for (int i = 0; i < 3; ++i) {
+    if (!out[i]) continue;
+    double d = ACP_NAN;
+    /* start from the speed found before (VMD for VMP and VMR) */
+    const double start = !ok0 ? 0.0 : i == 0 || isnan(*vmd) ? cv.pt[0].u : log(*vmd);
+    if (!ok0 || curve_speed(&cv, power[i], start, out[i], &d) != ACP_OK) {
+      if (!tabulated) grid_drag(s, drag);
+      tabulated = 1;
+      st = first_error(st, minimise(s, obj[i], drag, out[i]));
+    }
+    if (i == 0) *d_vmd = isnan(d) && !isnan(*vmd) ? polar_drag(ac, &s->atm, s->weight, *vmd) : d;
+  }
+  return st;
+}
+
 int acp_speeds(const acp_aircraft *ac, double mass, double hp, double dtemp,
                acp_speed_set *out) {
   if (!out) return ACP_ERR_INVALID;
@@ -130,12 +275,9 @@ int acp_speeds(const acp_aircraft *ac, double mass, double hp, double dtemp,
   search s;
   int st = setup(&s, ac, mass, hp, dtemp);
   if (st != ACP_OK) return st;
-  double drag[GRID]; /* evaluated once for the three searches */
-  grid_drag(&s, drag);
-  st = first_error(st, minimise(&s, OBJ_DRAG, drag, &out->vmd));
-  st = first_error(st, minimise(&s, OBJ_POWER, drag, &out->vmp));
-  st = first_error(st, minimise(&s, OBJ_RANGE, drag, &out->vmr));
-  if (!isnan(out->vmd)) out->ld_max = s.weight / polar_drag(ac, &s.atm, s.weight, out->vmd);
+  double d_vmd;
+  st = find_speeds(&s, &out->vmd, &d_vmd, &out->vmp, &out->vmr);
+  if (!isnan(out->vmd)) out->ld_max = s.weight / d_vmd;
   const double cl_max = ac->v[AK_CL_MAX];
   if (!isnan(cl_max))
     out->vs1g = sqrt(2.0 * s.weight / (s.atm.density * ac->v[AK_WING_AREA] * cl_max));
@@ -279,7 +421,8 @@ int acp_speed_stability(const acp_aircraft *ac, double mass, double hp, double d
   if (!isfinite(slope)) return ACP_ERR_RANGE; /* also a difference that overflows */
   out->slope = slope;
   out->stable = slope > 0.0 ? 1.0 : slope < 0.0 ? -1.0 : 0.0;
-  return minimise(&s, OBJ_DRAG, NULL, &out->vmd);
+  double d_vmd;
+  return find_speeds(&s, &out->vmd, &d_vmd, NULL, NULL);
 }
 
 size_t acp_speed_stability_n(const acp_aircraft *ac, size_t n, const double *mass,
@@ -314,7 +457,8 @@ size_t acp_speed_stability_boundary_n(const acp_aircraft *ac, size_t n, const do
     search s;
     const double dt = acp_opt(dtemp, i, 0.0);
     int st = setup(&s, ac, mass[i], hp[i], dt);
-    if (st == ACP_OK) st = minimise(&s, OBJ_DRAG, NULL, &v);
+    double d_vmd;
+    if (st == ACP_OK) st = find_speeds(&s, &v, &d_vmd, NULL, NULL);
     if (st == ACP_OK) {
       cas = acp_tas_to_cas(v, hp[i], dt);
       mach = acp_tas_to_mach(v, hp[i], dt);

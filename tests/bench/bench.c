@@ -4,6 +4,10 @@
  * usage: acperf_bench [n] [repetitions]    time every kernel, print CSV:
  *          kernel,n,median_ns_per_element,min_ns,max_ns,ratio_to_pow_floor
  *        acperf_bench --once KERNEL n     run one kernel once (for callgrind counts)
+ *        acperf_bench --ratios [rounds]   model functions in acp_drag() calls: each
+ *          timed in rounds alternated with rounds of plain acp_drag() calls at the
+ *          same conditions, minimum of each over the rounds, print CSV:
+ *          function,calls_per_round,rounds,ns_per_call_min,drag_ns_per_call_min,ratio_to_drag
  * Times drift on a shared machine; compare the ratios, not the nanoseconds.
  */
 #define _POSIX_C_SOURCE 199309L
@@ -80,6 +84,22 @@ __attribute__((noinline)) static void k_drag(const arrays *a) {
 __attribute__((noinline)) static void k_speeds(const arrays *a) {
   acp_speeds_n(a->ac, a->n, a->mass, a->hp, a->dtemp, a->o1, a->o2, a->o3, a->o4, NULL);
 }
+/* Scalar calls in a loop: what one call costs (the ratios of --ratios, and the
+   instruction counts of instructions.sh per call). */
+__attribute__((noinline)) static void k_drag_scalar(const arrays *a) {
+  for (size_t i = 0; i < a->n; ++i) {
+    acp_drag_parts d;
+    acp_drag(a->ac, a->mass[i], a->hp[i], a->dtemp[i], a->tas[i], &d);
+    a->o1[i] = d.total;
+  }
+}
+__attribute__((noinline)) static void k_speeds_scalar(const arrays *a) {
+  for (size_t i = 0; i < a->n; ++i) {
+    acp_speed_set v;
+    acp_speeds(a->ac, a->mass[i], a->hp[i], a->dtemp[i], &v);
+    a->o1[i] = v.vmr;
+  }
+}
 __attribute__((noinline)) static void k_sar(const arrays *a) {
   acp_specific_air_range_n(a->ac, a->n, a->mass, a->hp, a->dtemp, a->tas, NULL, a->o1);
 }
@@ -155,6 +175,8 @@ static const kernel KERNELS[] = {
     {"ft_to_m (scalar loop)", k_ft_to_m_scalar, 0},
     {"drag_n", k_drag, 20000},
     {"speeds_n", k_speeds, 200},
+    {"drag (scalar loop)", k_drag_scalar, 20000},
+    {"speeds (scalar loop)", k_speeds_scalar, 200},
     {"specific_air_range_n", k_sar, 20000},
     {"climb_1500ft_to_FL350", k_climb, 50},
     {"cruise_500NM", k_cruise, 20},
@@ -182,11 +204,48 @@ static double *alloc(size_t n) {
   return p;
 }
 
+static void table(arrays *ap, size_t n, int reps);
+
+/* Nanoseconds per call of kernel k on a->n calls. */
+static double per_call_ns(void (*k)(const arrays *), const arrays *a) {
+  const double t0 = now_ns();
+  k(a);
+  return (now_ns() - t0) / (double)a->n;
+}
+
+/* The --ratios table: each model function against acp_drag() in alternated
+   rounds on the same conditions, the minimum of each (issue 14's method: the
+   ratio holds from machine to machine where the times do not). */
+static void ratios(arrays *a, int rounds) {
+  static const struct {
+    const char *name;
+    void (*run)(const arrays *);
+    size_t calls;
+  } F[] = {{"acp_speeds", k_speeds_scalar, 200}};
+  const size_t n = a->n;
+  printf("function,calls_per_round,rounds,ns_per_call_min,drag_ns_per_call_min,ratio_to_drag\n");
+  for (size_t f = 0; f < sizeof F / sizeof F[0]; ++f) {
+    a->n = F[f].calls < n ? F[f].calls : n;
+    double t_f = INFINITY, t_d = INFINITY;
+    F[f].run(a); /* warm-up */
+    k_drag_scalar(a);
+    for (int r = 0; r < rounds; ++r) {
+      t_f = fmin(t_f, per_call_ns(F[f].run, a));
+      t_d = fmin(t_d, per_call_ns(k_drag_scalar, a));
+    }
+    printf("%s,%zu,%d,%.3f,%.3f,%.2f\n", F[f].name, a->n, rounds, t_f, t_d, t_f / t_d);
+  }
+  a->n = n;
+}
+
 int main(int argc, char **argv) {
   const int once = argc == 4 && strcmp(argv[1], "--once") == 0;
+  const int ratio_mode = argc >= 2 && strcmp(argv[1], "--ratios") == 0;
   const size_t n = once ? (size_t)strtoull(argv[3], NULL, 10)
-                        : argc > 1 ? (size_t)strtoull(argv[1], NULL, 10) : 100000;
-  const int reps = once ? 1 : argc > 2 ? atoi(argv[2]) : 31;
+                   : ratio_mode ? 200
+                   : argc > 1 ? (size_t)strtoull(argv[1], NULL, 10) : 100000;
+  const int reps = once ? 1 : ratio_mode ? (argc > 2 ? atoi(argv[2]) : 51)
+                   : argc > 2 ? atoi(argv[2]) : 31;
   if (n == 0 || reps < 1) return 2;
   arrays a = {n, alloc(n), alloc(n), alloc(n), alloc(n), alloc(n),
               alloc(n), alloc(n), alloc(n), alloc(n), acp_aircraft_new(), alloc(n), alloc(n)};
@@ -221,6 +280,20 @@ int main(int argc, char **argv) {
     fprintf(stderr, "unknown kernel %s\n", argv[2]);
     return 2;
   }
+  if (ratio_mode)
+    ratios(&a, reps);
+  else
+    table(&a, n, reps);
+  acp_aircraft_free(a.ac);
+  double *all[] = {a.hp, a.dtemp, a.speed, a.base, a.expo, a.o1, a.o2, a.o3, a.o4, a.mass, a.tas};
+  for (size_t i = 0; i < sizeof all / sizeof all[0]; ++i) free(all[i]);
+  return 0;
+}
+
+/* The kernel table: every kernel timed reps times on n points (or its n_max). */
+static void table(arrays *ap, size_t n, int reps) {
+  arrays a = *ap;
+  const size_t nk = sizeof KERNELS / sizeof KERNELS[0];
   double *t = alloc((size_t)reps);
   double floor_pow_ns = NAN;
   printf("kernel,n,median_ns_per_element,min_ns,max_ns,ratio_to_pow_floor\n");
@@ -239,8 +312,4 @@ int main(int argc, char **argv) {
            med / floor_pow_ns);
   }
   free(t);
-  acp_aircraft_free(a.ac);
-  double *all[] = {a.hp, a.dtemp, a.speed, a.base, a.expo, a.o1, a.o2, a.o3, a.o4, a.mass, a.tas};
-  for (size_t i = 0; i < sizeof all / sizeof all[0]; ++i) free(all[i]);
-  return 0;
 }

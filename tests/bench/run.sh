@@ -3,7 +3,8 @@
 # the Python binding when SWIG and numpy are there), runs the C benchmark (1e6
 # points, 21 repetitions; model kernels on fewer points or calls) and the Python
 # comparison (times, and instructions per scalar call when valgrind is there),
-# and writes build-bench/results.csv, results.md and python.txt.
+# and writes build-bench/results.csv, ratios.csv (model functions in acp_drag()
+# calls), results.md and python.txt.
 # Usage, from the top of the repository:   sh tests/bench/run.sh
 set -eu
 cd "$(dirname "$0")/../.."
@@ -22,6 +23,14 @@ out=build-bench
   echo "|---|---|---|---|---|---|"
   tail -n +2 "$out/results.csv" | awk -F, '{printf "| %s | %s | %.2f | %.2f | %.2f | %s |\n", $1, $2, $3, $4, $5, ($6 == "nan" ? "" : sprintf("%.2f", $6))}'
 } > "$out/results.md"
+# Model functions in acp_drag() calls (alternated rounds, minimum of each)
+./build-bench/tests/bench/acperf_bench --ratios 51 > "$out/ratios.csv"
+{
+  echo
+  echo "| function | calls per round | rounds | ns per call (min) | acp_drag ns per call (min) | ratio to one acp_drag() call |"
+  echo "|---|---|---|---|---|---|"
+  tail -n +2 "$out/ratios.csv" | awk -F, '{printf "| %s | %s | %s | %.1f | %.1f | %.2f |\n", $1, $2, $3, $4, $5, $6}'
+} >> "$out/results.md"
 cat "$out/results.md"
 if [ "$python" = ON ]; then
   PYTHONPATH=build-bench/bindings/python /usr/bin/python3 tests/bench/bench_python.py \
