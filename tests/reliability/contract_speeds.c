@@ -22,7 +22,9 @@ static void check_set(contract *c, const char *fn, int st, const acp_speed_set *
   contract_value(c, fn, s->vmp, 0x1p-1074, hi);
   contract_value(c, fn, s->vmr, 0x1p-1074, hi);
   contract_value(c, fn, s->vs1g, 0x1p-1074, 1e6);
-  contract_value(c, fn, s->ld_max, 0x1p-1074, 1e3);
+  /* as the best glide ratio below: L/D max has no documented bound (a whole-range
+     aircraft of the model fuzzer reached 4,309; the bound was 1,000) */
+  contract_value(c, fn, s->ld_max, 0x1p-1074, 1e7);
   if (st == ACP_OK)
     contract_expect(c, !isnan(s->vmd) && !isnan(s->vmp) && !isnan(s->vmr) && !isnan(s->ld_max), fn,
                     "ACP_OK with a NaN speed");
