@@ -392,6 +392,14 @@ static int speed_change(const acp_aircraft *ac, double mass, double hp, double d
   int st = check_args(ac, mass, hp, hp, dtemp, wind, &step, relax, &lim);
   if (st == ACP_OK && !(isfinite(v0) && isfinite(v1))) st = ACP_ERR_INVALID;
   if (st == ACP_OK && !(v0 > 0.0 && v1 > 0.0)) st = ACP_ERR_RANGE;
+  /* both ends inside the speed limits, so that an excess names the speed asked for */
+  acp_atmos at;
+  if (st == ACP_OK) st = acp_isa(hp, dtemp, &at);
+  for (int i = 0; i < 2 && st == ACP_OK; ++i) {
+    const double v = i ? v1 : v0, mach = v / at.sound_speed;
+    st = perf_speed_envelope(ac, perf_lift_coefficient(ac, mass, &at, v), mach,
+                             acp_mach_to_cas(mach, hp), &lim);
+  }
   run r = {.cur = {.hp = hp, .mass = mass, .tas = v0, .time = 0.0, .distance = 0.0,
                    .mode = ACP_NAN}};
   if (st == ACP_OK && v1 != v0) {

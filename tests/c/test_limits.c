@@ -162,6 +162,13 @@ static void test_cruise_limits(void **state) {
   const double cl_cruise = 32000 * ACP_G0 / (0.7 * acp_isa_pressure(10000) * p.mach * p.mach *
                                              key(g_jet, "wing_area"));
   CHECK_CLOSE(p.buffet_margin, key(g_jet, "cl_buffet") / cl_cruise, 0.0, 1e-9, "buffet margin");
+  /* a speed change to MMO itself, and beyond it (FL350, where MMO binds before VMO) */
+  const double a350 = acp_isa_sound_speed(10668.0, 0), mmo = key(g_jet, "mmo");
+  acp_profile sc;
+  assert_int_equal(acp_level_speed_change(g_jet, 30000, 10668.0, 0, 0, 0.76 * a350, mmo * a350, &sc),
+                   ACP_OK);
+  CHECK_LIMIT(acp_level_speed_change(g_jet, 30000, 10668.0, 0, 0, 0.76 * a350, (mmo + 0.01) * a350, &sc),
+              sc, ACP_LIMIT_MMO, 0.01, "beyond MMO");
   /* SAR above VMO and below the stall */
   const double v_vmo = acp_cas_to_tas(key(g_jet, "vmo"), 3000, 0);
   assert_int_equal(acp_specific_air_range(g_jet, 30000, 3000, 0, v_vmo, 0, &sar), ACP_OK);
