@@ -14,8 +14,9 @@ scalars, lists, numpy arrays and pandas Series, broadcast against each other:
 
 A scalar call that fails raises :class:`AcperfError` (a ``ValueError``) with
 the status text of the library; an array call gives NaN for the invalid points
-and warns with :class:`AcperfWarning`. ``acperf.capi`` is the raw SWIG module
-with every C function under its C name.
+and warns with :class:`AcperfWarning`. Coded result fields are IntEnum members
+(``TripInfeasible``, ``Limit``, ``CruiseLimit``, ``ScheduleMode``, ...).
+``acperf.capi`` is the raw SWIG module with every C function under its C name.
 
 Caution: results are engineering estimates, not approved flight-manual data.
 Operational use defers to the aircraft's approved data, the operator's approved
@@ -24,6 +25,7 @@ procedures and the local aviation authority's rules.
 
 from . import capi
 from ._core import AcperfError, AcperfWarning, Result
+from ._enums import *  # noqa: F401,F403
 from . import units
 from .atmosphere import *  # noqa: F401,F403
 from .airspeed import *  # noqa: F401,F403
@@ -34,13 +36,13 @@ from ._speeds import *  # noqa: F401,F403
 from .performance import *  # noqa: F401,F403
 from ._cruise import *  # noqa: F401,F403
 from . import atmosphere as _atmosphere, airspeed as _airspeed, friction as _friction
-from . import _polar, _speeds, performance as _performance, _cruise
+from . import _polar, _speeds, performance as _performance, _cruise, _enums
 
 strerror = capi.acp_strerror
 version = capi.acp_version
 version_string = capi.acp_version_string
 __version__ = capi.acp_version_string()
 
-__all__ = ["AcperfError", "AcperfWarning", "Result", "capi", "units", "strerror", "version",
-           "version_string", "Aircraft", *_atmosphere.__all__, *_airspeed.__all__,
+__all__ = ["AcperfError", "AcperfWarning", "Result", *_enums.__all__, "capi",
+           "units", "strerror", "version", "version_string", "Aircraft", *_atmosphere.__all__, *_airspeed.__all__,
            *_friction.__all__, *_polar.__all__, *_speeds.__all__, *_performance.__all__, *_cruise.__all__]

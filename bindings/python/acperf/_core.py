@@ -34,6 +34,7 @@ import numpy as np
 
 from . import capi as _c
 from . import _fast
+from ._enums import coded
 
 AcperfError = _c.AcperfError
 AcperfError.__module__ = "acperf"
@@ -50,6 +51,15 @@ class Result:
 
     __slots__ = ()
 
+    _enums = ()  # per field: the IntEnum of a coded field, else None (result_type)
+
+    @classmethod
+    def _from_c(cls, values):
+        """The result of the C outputs `values` (floats), coded fields as enum members."""
+        if not any(cls._enums):
+            return cls(*values)
+        return cls(*(coded(e, v) for e, v in zip(cls._enums, values)))
+
     def to_dict(self):
         """The fields as a dict, in field order."""
         return dict(zip(self._fields, self))
@@ -65,10 +75,19 @@ class Result:
         return pd.DataFrame({k: np.asarray(v).ravel() for k, v in data.items()}, index=index)
 
 
-def result_type(name, fields, doc):
-    """A named result: a namedtuple whose fields are the C struct's field names."""
+def result_type(name, fields, doc, codes=None):
+    """A named result: a namedtuple whose fields are the C struct's field names.
+
+    codes  {field: IntEnum} of the fields that hold a C enum value (acperf/_enums.py):
+           a scalar result gives the member there (a float NaN stays NaN)."""
+    codes = dict(codes or {})
+    unknown = set(codes) - set(fields)
+    if unknown:
+        raise ValueError(f"{name}: coded fields {sorted(unknown)} are not fields")
     base = collections.namedtuple(name, fields)
-    return type(name, (Result, base), {"__slots__": (), "__doc__": doc, "__module__": "acperf"})
+    return type(name, (Result, base), {
+        "__slots__": (), "__doc__": doc, "__module__": "acperf",
+        "_enums": tuple(codes.get(f) for f in fields)})
 
 
 def struct_fields(swig_type):
@@ -150,8 +169,8 @@ def bind(name, scalar, array=None, params=(), defaults=None, outputs=None, resul
     else:
         def finish(value, _result=result, _fields=result._fields):
             if isinstance(value, list):  # several out-pointers
-                return _result(*value)
-            return _result(*(getattr(value, f) for f in _fields))  # an output struct
+                return _result._from_c(value)
+            return _result._from_c([getattr(value, f) for f in _fields])  # an output struct
         code = _TEMPLATE
         namespace = {"_scalar": scalar, "_array": array_path, "_finish": finish,
                      "_model": model_handle}
@@ -175,7 +194,10 @@ def fast_path(fn, cname, params, defaults=(), result=None):
     the fields of `result`."""
     if cname not in _FAST_NAMES:
         return fn
-    fast = _fast.function(cname, params, fn, defaults, result)
+    codes = None
+    if result is not None and any(result._enums):
+        codes = tuple(None if e is None else dict(e._value2member_map_) for e in result._enums)
+    fast = _fast.function(cname, params, fn, defaults, result, codes)
     if result is not None and tuple(result._fields) != fast.fast_outputs:
         return fn
     fast.__dict__.update(fn.__dict__)  # c_function, c_array_function, c_models
@@ -232,8 +254,8 @@ def _array_call(fname, scalar, array, models, values, params, nulls, outputs, re
         if result is None:
             return out
         if isinstance(out, list):
-            return result(*out)
-        return result(*(getattr(out, f) for f in result._fields))
+            return result._from_c(out)
+        return result._from_c([getattr(out, f) for f in result._fields])
     n = int(np.prod(shape))
     if array is not None:
         flat = []

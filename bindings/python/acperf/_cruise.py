@@ -13,6 +13,7 @@ import numpy as np
 from . import _fast
 from . import capi as _c
 from ._core import bind, model_handle, result_type
+from ._enums import CruiseEnd, CruiseLimit, CruiseMode, Limit, TripInfeasible
 
 __all__ = ["CruisePoint", "CruiseResult", "TripResult", "Mission",
            "CRUISE_FIXED_MACH", "CRUISE_MAX_RANGE", "CRUISE_LONG_RANGE", "CRUISE_ECONOMY",
@@ -21,13 +22,13 @@ __all__ = ["CruisePoint", "CruiseResult", "TripResult", "Mission",
            "cruise_trace", "breguet_range",
            "breguet_endurance", "breguet_range_propeller", "trip", "trip_for_zero_fuel_mass"]
 
-CRUISE_FIXED_MACH = _c.ACP_CRUISE_FIXED_MACH
-CRUISE_MAX_RANGE = _c.ACP_CRUISE_MAX_RANGE
-CRUISE_LONG_RANGE = _c.ACP_CRUISE_LONG_RANGE
-CRUISE_ECONOMY = _c.ACP_CRUISE_ECONOMY
-CRUISE_MAX_ENDURANCE = _c.ACP_CRUISE_MAX_ENDURANCE
-END_DISTANCE, END_FUEL, END_TIME = _c.ACP_CRUISE_END_DISTANCE, _c.ACP_CRUISE_END_FUEL, \
-    _c.ACP_CRUISE_END_TIME
+# The C constants under their old Python names: the members of acperf.CruiseMode, CruiseEnd.
+CRUISE_FIXED_MACH = CruiseMode.FIXED_MACH
+CRUISE_MAX_RANGE = CruiseMode.MAX_RANGE
+CRUISE_LONG_RANGE = CruiseMode.LONG_RANGE
+CRUISE_ECONOMY = CruiseMode.ECONOMY
+CRUISE_MAX_ENDURANCE = CruiseMode.MAX_ENDURANCE
+END_DISTANCE, END_FUEL, END_TIME = CruiseEnd.DISTANCE, CruiseEnd.FUEL, CruiseEnd.TIME
 
 
 CruisePoint = result_type(
@@ -35,14 +36,16 @@ CruisePoint = result_type(
     ("time", "distance", "hp", "mass", "tas", "cas", "mach", "ground_speed", "drag",
      "fuel_flow", "tsfc", "lift_to_drag", "sar", "limit", "buffet_margin", "limit_exceeded",
      "limit_excess"),
-    "Level flight at a cruise point (the fields of acp_cruise_point); in a trace each "
-    "field is an array over the points.")
+    "Level flight at a cruise point (the fields of acp_cruise_point); limit is a "
+    "CruiseLimit, limit_exceeded a Limit; in a trace each field is an array over the "
+    "points (the codes as floats).", {"limit": CruiseLimit, "limit_exceeded": Limit})
 CruiseResult = result_type(
     "CruiseResult",
     ("time", "distance", "fuel", "mass_end", "hp_end", "sar_mean", "tas_start", "tas_end",
      "mach_start", "mach_end", "step_climbs", "step_climb_time", "step_climb_distance",
      "step_climb_fuel", "limit", "limit_excess", "buffet_margin_min"),
-    "Totals of a cruise (the fields of acp_cruise_result).")
+    "Totals of a cruise (the fields of acp_cruise_result); limit is a Limit.",
+    {"limit": Limit})
 CruiseSpeeds = result_type(
     "CruiseSpeeds", ("tas", "mach", "sar"),
     "Speed of a cruise mode over arrays of conditions (outputs of acp_cruise_speed_n).")
@@ -57,7 +60,8 @@ TripResult = result_type(
      "climb_acceleration_distance", "climb_acceleration_fuel", "descent_deceleration_time",
      "descent_deceleration_distance", "descent_deceleration_fuel", "approach_deceleration_time",
      "approach_deceleration_distance", "approach_deceleration_fuel"),
-    "A trip and its fuel (the fields of acp_trip_result).")
+    "A trip and its fuel (the fields of acp_trip_result); infeasible is a TripInfeasible "
+    "(FEASIBLE for a trip flown).", {"infeasible": TripInfeasible})
 
 
 class Mission(_fast.model):
@@ -145,7 +149,7 @@ def cruise_trace(ac, mode, cost_index, mass, hp, dtemp, wind, end, end_value, st
             capacity *= 4
     points = np.asarray(points)
     trace = CruisePoint(*(points[:, i].copy() for i in range(points.shape[1])))
-    return trace, CruiseResult(*(getattr(totals, f) for f in CruiseResult._fields))
+    return trace, CruiseResult._from_c([getattr(totals, f) for f in CruiseResult._fields])
 
 
 cruise_trace.c_function = "acp_cruise_trace"
