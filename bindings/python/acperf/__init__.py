@@ -13,10 +13,12 @@ scalars, lists, numpy arrays and pandas Series, broadcast against each other:
     >>> acperf.drag(ac, 30000.0, 10000.0, 0.0, [180.0, 200.0]).total
 
 A scalar call that fails raises :class:`AcperfError` (a ``ValueError``) with
-the status text of the library; an array call gives NaN for the invalid points
-and warns with :class:`AcperfWarning`. Coded result fields are IntEnum members
-(``TripInfeasible``, ``Limit``, ``CruiseLimit``, ``ScheduleMode``, ...).
-``acperf.capi`` is the raw SWIG module with every C function under its C name.
+the status text of the library (:class:`InfeasibleTrip`, a subclass, for a trip
+that cannot be flown: its ``reason``, ``excess`` and ``result``); an array call
+gives NaN for the invalid points and warns with :class:`AcperfWarning`. Coded
+result fields are IntEnum members (``TripInfeasible``, ``Limit``, ``CruiseLimit``,
+``ScheduleMode``, ...). ``acperf.capi`` is the raw SWIG module with every C
+function under its C name.
 
 Caution: results are engineering estimates, not approved flight-manual data.
 Operational use defers to the aircraft's approved data, the operator's approved
@@ -24,7 +26,7 @@ procedures and the local aviation authority's rules.
 """
 
 from . import capi
-from ._core import AcperfError, AcperfWarning, Result
+from ._core import AcperfError, AcperfWarning, InfeasibleTrip, Result
 from ._enums import *  # noqa: F401,F403
 from . import units
 from .atmosphere import *  # noqa: F401,F403
@@ -43,6 +45,6 @@ version = capi.acp_version
 version_string = capi.acp_version_string
 __version__ = capi.acp_version_string()
 
-__all__ = ["AcperfError", "AcperfWarning", "Result", *_enums.__all__, "capi",
+__all__ = ["AcperfError", "InfeasibleTrip", "AcperfWarning", "Result", *_enums.__all__, "capi",
            "units", "strerror", "version", "version_string", "Aircraft", *_atmosphere.__all__, *_airspeed.__all__,
            *_friction.__all__, *_polar.__all__, *_speeds.__all__, *_performance.__all__, *_cruise.__all__]

@@ -42,6 +42,24 @@ _fast.set_error(AcperfError)
 _FAST_NAMES = frozenset(_fast.names())
 
 
+class InfeasibleTrip(AcperfError):
+    """A trip that cannot be flown, and why (acp_trip, acp_trip_for_zero_fuel_mass).
+
+    reason  the acperf.TripInfeasible member the library names
+    excess  by how much the limit is exceeded, a float in the unit TripInfeasible
+            documents (kg, m, or a lift coefficient; NaN where it has none)
+    result  the TripResult of the call: infeasible and excess, every other field NaN
+    status  the acp_status code (ACP_ERR_RANGE or ACP_ERR_THRUST)
+    """
+
+    def __init__(self, message, reason=None, excess=float("nan"), result=None, status=None):
+        super().__init__(message)
+        self.reason, self.excess, self.result, self.status = reason, excess, result, status
+
+
+InfeasibleTrip.__module__ = "acperf"
+
+
 class AcperfWarning(RuntimeWarning):
     """Some points of an array call were invalid; their results are NaN."""
 
@@ -268,11 +286,13 @@ def _array_call(fname, scalar, array, models, values, params, nulls, outputs, re
             flat.append(np.ascontiguousarray(a).reshape(n))
         res = array(*models, *flat, *array_extra)
         bad, outs = res[0], res[1:]
+        kept = ()
     else:
-        bad, outs = _pointwise(scalar, models, arrays, shape, n, outputs)
+        bad, outs, kept = _pointwise(scalar, models, arrays, shape, n, outputs)
     if bad:
+        but = f" but for {', '.join(kept)}" if kept else ""
         warnings.warn(f"{fname}: {bad} of {n} points invalid (argument invalid or outside "
-                      "the model's valid range); their results are NaN",
+                      f"the model's valid range); their results are NaN{but}",
                       AcperfWarning, stacklevel=4)
     index = _series_index(values)
     names = outputs if outputs is not None else (None,)
@@ -290,17 +310,23 @@ def _array_call(fname, scalar, array, models, values, params, nulls, outputs, re
 
 
 def _pointwise(scalar, models, arrays, shape, n, outputs):
-    """Array path of a function without a C array form: one scalar call per point."""
+    """Array path of a function without a C array form: one scalar call per point.
+    A failed point is NaN, except for what its exception's `result` keeps (the
+    reason and excess of an infeasible trip: mission.h). Returns the count of
+    failed points, the outputs and the names of the fields such points kept."""
     flat = [np.broadcast_to(a, shape).reshape(n) for a in arrays]
     nout = 1 if outputs is None else len(outputs)
     outs = [np.full(n, np.nan) for _ in range(nout)]
-    bad = 0
+    bad, kept = 0, {}
     for i in range(n):
         try:
             r = scalar(*models, *(float(a[i]) for a in flat))
-        except AcperfError:
+        except AcperfError as exc:
             bad += 1
-            continue
+            r = getattr(exc, "result", None)
+            if r is None or outputs is None:
+                continue
+            kept.update((f, None) for f in outputs if not np.isnan(getattr(r, f)))
         if nout == 1:
             outs[0][i] = r
         elif isinstance(r, list):
@@ -309,4 +335,4 @@ def _pointwise(scalar, models, arrays, shape, n, outputs):
         else:
             for o, f in zip(outs, outputs):
                 o[i] = getattr(r, f)
-    return bad, outs
+    return bad, outs, tuple(kept)

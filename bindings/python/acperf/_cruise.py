@@ -8,11 +8,13 @@ policy and local rules). Results are engineering estimates, not approved
 flight-manual data.
 """
 
+import functools
+
 import numpy as np
 
 from . import _fast
 from . import capi as _c
-from ._core import bind, model_handle, result_type
+from ._core import AcperfError, InfeasibleTrip, bind, model_handle, result_type
 from ._enums import CruiseEnd, CruiseLimit, CruiseMode, Limit, TripInfeasible
 
 __all__ = ["CruisePoint", "CruiseResult", "TripResult", "Mission",
@@ -119,11 +121,93 @@ breguet_endurance = bind("breguet_endurance", _c.acp_breguet_endurance, None,
 breguet_range_propeller = bind("breguet_range_propeller", _c.acp_breguet_range_propeller, None,
                                ("propeller_efficiency", "psfc", "lift_to_drag", "mass_start",
                                 "mass_end"))
-trip = bind("trip", _c.acp_trip, None, ("ac", "mission", "takeoff_mass"), result=TripResult,
-            models=("ac", "mission"))
-trip_for_zero_fuel_mass = bind("trip_for_zero_fuel_mass", _c.acp_trip_for_zero_fuel_mass, None,
-                               ("ac", "mission", "zero_fuel_mass"), result=TripResult,
-                               models=("ac", "mission"))
+
+# Why a trip is infeasible, in words (enum acp_trip_infeasible of acperf/mission.h): the
+# text, the model holding the limit ("A" aircraft, "M" mission) and its key, the unit of
+# the excess.
+_INFEASIBLE = {
+    TripInfeasible.OVER_MAX_TAKEOFF: ("take-off mass above mass_max_takeoff", "A",
+                                      "mass_max_takeoff", "kg"),
+    TripInfeasible.OVER_MAX_LANDING: ("landing mass above mass_max_landing", "A",
+                                      "mass_max_landing", "kg"),
+    TripInfeasible.OVER_FUEL_CAPACITY: ("block fuel above fuel_capacity", "A", "fuel_capacity",
+                                        "kg"),
+    TripInfeasible.OVER_MAX_ZERO_FUEL: ("zero-fuel mass above mass_max_zero_fuel", "A",
+                                        "mass_max_zero_fuel", "kg"),
+    TripInfeasible.TOO_SHORT: ("distance shorter than the climb and descent", "M", "distance",
+                               "m"),
+    TripInfeasible.ABOVE_MAX_ALTITUDE: ("cruise_altitude above max_altitude", "A",
+                                        "max_altitude", "m"),
+    TripInfeasible.CANNOT_CLIMB: ("cruise_altitude cannot be reached: not enough thrust", "M",
+                                  "cruise_altitude", "m"),
+    TripInfeasible.CANNOT_CRUISE: ("level flight cannot be held in cruise or holding: not "
+                                   "enough thrust", "M", "cruise_altitude", "m"),
+    TripInfeasible.CRUISE_TOO_LOW: ("cruise_altitude not above the origin and destination",
+                                    "M", "cruise_altitude", "m"),
+    TripInfeasible.NO_FUEL: ("the fuel needed exceeds the mass available", None, None, "kg"),
+    TripInfeasible.BELOW_OPERATING_EMPTY: ("a take-off or zero-fuel mass below "
+                                           "mass_operating_empty", "A", "mass_operating_empty",
+                                           "kg"),
+    TripInfeasible.BELOW_STALL: ("cruise or holding speed below the 1 g stall: lift "
+                                 "coefficient above cl_max", "A", "cl_max", ""),
+}
+
+
+def _figure(x, unit):
+    """A number for a message: 1,234 kg, 0.0312."""
+    text = f"{x:,.0f}" if abs(x) >= 100.0 else f"{x:.3g}"
+    return f"{text} {unit}" if unit else text
+
+
+def _infeasible_message(fname, param, mass, reason, excess, ac, mission):
+    """fname(param=mass kg): why, by how much (the limit's key = its value)."""
+    text, model, key, unit = _INFEASIBLE[reason]
+    message = f"{fname}({param}={_figure(mass, 'kg')}): {text}"
+    if np.isfinite(excess):
+        message += f" by {_figure(excess, unit)}"
+    if key is not None:
+        try:
+            value = (_c.acp_aircraft_get(ac, key) if model == "A"
+                     else _c.acp_mission_get(mission, key))
+        except _c.AcperfError:
+            value = float("nan")  # the key is not given
+        if np.isfinite(value):
+            message += f" ({key} = {_figure(value, unit)})"
+    return message
+
+
+def _trip_form(cfunc, fname, param):
+    """The scalar form of a trip function for bind(): the SWIG call (handles in, the
+    acp_trip_result out), raising InfeasibleTrip when the library names a reason, and
+    otherwise the SWIG AcperfError with a TripResult as its `result`. No fast path:
+    a trip takes milliseconds, and this is the one place that reads the reason."""
+
+    @functools.wraps(cfunc)
+    def call(ac, mission, mass):
+        try:
+            return cfunc(ac, mission, mass)
+        except AcperfError as exc:
+            raw = getattr(exc, "result", None)
+            if raw is None:
+                raise
+            result = TripResult._from_c([getattr(raw, f) for f in TripResult._fields])
+            reason = result.infeasible
+            if not isinstance(reason, TripInfeasible) or reason == TripInfeasible.FEASIBLE:
+                exc.result = result
+                raise
+            message = _infeasible_message(fname, param, mass, reason, result.excess, ac,
+                                          mission)
+            raise InfeasibleTrip(message, reason, result.excess, result, exc.status) from None
+
+    return call
+
+
+trip = bind("trip", _trip_form(_c.acp_trip, "trip", "takeoff_mass"), None,
+            ("ac", "mission", "takeoff_mass"), result=TripResult, models=("ac", "mission"))
+trip_for_zero_fuel_mass = bind(
+    "trip_for_zero_fuel_mass",
+    _trip_form(_c.acp_trip_for_zero_fuel_mass, "trip_for_zero_fuel_mass", "zero_fuel_mass"),
+    None, ("ac", "mission", "zero_fuel_mass"), result=TripResult, models=("ac", "mission"))
 
 
 def cruise_trace(ac, mode, cost_index, mass, hp, dtemp, wind, end, end_value, step=0.0,
