@@ -17,8 +17,9 @@ the status text of the library (:class:`InfeasibleTrip`, a subclass, for a trip
 that cannot be flown: its ``reason``, ``excess`` and ``result``); an array call
 gives NaN for the invalid points and warns with :class:`AcperfWarning`. Coded
 result fields are IntEnum members (``TripInfeasible``, ``Limit``, ``CruiseLimit``,
-``ScheduleMode``, ...). ``acperf.capi`` is the raw SWIG module with every C
-function under its C name.
+``ScheduleMode``, ...). A str with a NUL character is refused (C strings end
+there). ``acperf.capi`` is the raw SWIG module with every C function under its C
+name.
 
 Caution: results are engineering estimates, not approved flight-manual data.
 Operational use defers to the aircraft's approved data, the operator's approved
