@@ -134,16 +134,16 @@ _INFEASIBLE = {
                                         "kg"),
     TripInfeasible.OVER_MAX_ZERO_FUEL: ("zero-fuel mass above mass_max_zero_fuel", "A",
                                         "mass_max_zero_fuel", "kg"),
-    TripInfeasible.TOO_SHORT: ("distance shorter than the climb and descent", "M", "distance",
-                               "m"),
+    TripInfeasible.TOO_SHORT: ("distance shorter than the segments other than the cruise", "M",
+                               "distance", "m"),
     TripInfeasible.ABOVE_MAX_ALTITUDE: ("cruise_altitude above max_altitude", "A",
                                         "max_altitude", "m"),
     TripInfeasible.CANNOT_CLIMB: ("cruise_altitude cannot be reached: not enough thrust", "M",
                                   "cruise_altitude", "m"),
     TripInfeasible.CANNOT_CRUISE: ("level flight cannot be held in cruise or holding: not "
                                    "enough thrust", "M", "cruise_altitude", "m"),
-    TripInfeasible.CRUISE_TOO_LOW: ("cruise_altitude not above the origin and destination",
-                                    "M", "cruise_altitude", "m"),
+    TripInfeasible.CRUISE_TOO_LOW: ("cruise_altitude not above the origin and the descent's "
+                                    "end", "M", "cruise_altitude", "m"),
     TripInfeasible.NO_FUEL: ("the fuel needed exceeds the mass available", None, None, "kg"),
     TripInfeasible.BELOW_OPERATING_EMPTY: ("a take-off or zero-fuel mass below "
                                            "mass_operating_empty", "A", "mass_operating_empty",
