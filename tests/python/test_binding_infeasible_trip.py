@@ -166,6 +166,12 @@ def test_array_trip_gives_reason_and_excess_per_row(clib):
     assert got.excess[1] == 4000.0 and got.excess[2] == 4500.0
 
 
+def test_help_says_what_an_infeasible_trip_raises():
+    for fn in (acperf.trip, acperf.trip_for_zero_fuel_mass):
+        assert "acperf.InfeasibleTrip: .reason (a TripInfeasible)" in fn.__doc__
+        assert "Fly a mission" in fn.__doc__ or "take-off mass needed" in fn.__doc__  # C's
+
+
 def test_a_feasible_trip_says_feasible_on_every_path(clib):
     mission = acperf.Mission(distance=500 * NM, cruise_altitude=FL350)
     _, want = c_trip(clib, "trip", mission, 36000.0)

@@ -208,6 +208,12 @@ trip_for_zero_fuel_mass = bind(
     "trip_for_zero_fuel_mass",
     _trip_form(_c.acp_trip_for_zero_fuel_mass, "trip_for_zero_fuel_mass", "zero_fuel_mass"),
     None, ("ac", "mission", "zero_fuel_mass"), result=TripResult, models=("ac", "mission"))
+for _fn in (trip, trip_for_zero_fuel_mass):
+    _fn.__doc__ = _fn.__doc__.replace(
+        "\n\nResults are engineering estimates", "\nA trip that cannot be flown raises "
+        "acperf.InfeasibleTrip: .reason (a TripInfeasible), .excess\n(its unit in "
+        "TripInfeasible) and .result (the TripResult, the rest NaN); an array\ncall "
+        "gives infeasible and excess per row.\n\nResults are engineering estimates", 1)
 
 
 def cruise_trace(ac, mode, cost_index, mass, hp, dtemp, wind, end, end_value, step=0.0,
