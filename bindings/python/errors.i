@@ -117,3 +117,39 @@ static void acpy_raise_call_detail(const char *function, PyObject *args, int sta
 %typemap(argout) (char *buf, size_t len), (char *key, size_t len), (char *name, size_t len) {
   $result = SWIG_Python_AppendOutput($result, PyUnicode_FromString(text$argnum));
 }
+
+/* A str argument (keys, names, units, text, paths): a C string ends at its first
+   NUL, so a str with an embedded NUL would reach C cut short (a key, a name or a
+   whole aircraft text silently truncated). Refused before the call with
+   AcperfError (status ACP_ERR_INVALID, a ValueError) naming the argument. */
+%{
+static void acpy_raise_nul(const char *function, const char *argument, PyObject *value,
+                           size_t at) {
+  PyObject *message =
+      PyUnicode_GET_LENGTH(value) <= 40
+          ? PyUnicode_FromFormat("%s: %s %R contains a NUL character at index %zu; C strings "
+                                 "end there, so it is refused", function, argument, value, at)
+          : PyUnicode_FromFormat("%s: %s (%zd characters) contains a NUL character at index "
+                                 "%zu; C strings end there, so it is refused", function,
+                                 argument, PyUnicode_GET_LENGTH(value), at);
+  if (!message) return;
+  const char *utf8 = PyUnicode_AsUTF8(message);
+  if (utf8) acpy_raise(utf8, ACP_ERR_INVALID);
+  Py_DECREF(message);
+}
+%}
+%typemap(in, noblock=1) const char * (int res, char *buf = 0, size_t size = 0, int alloc = 0) {
+  res = SWIG_AsCharPtrAndSize($input, &buf, &size, &alloc);
+  if (!SWIG_IsOK(res)) {
+    %argument_fail(res, "$type", $symname, $argnum);
+  }
+  if (buf && size > 0 && strlen(buf) != size - 1) {
+    acpy_raise_nul("$symname", "$1_name", $input,
+                   (size_t)PyUnicode_FindChar($input, 0, 0, PY_SSIZE_T_MAX, 1));
+    SWIG_fail;
+  }
+  $1 = ($1_ltype)buf;
+}
+%typemap(freearg, noblock=1) const char * {
+  if (alloc$argnum == SWIG_NEWOBJ) %delete_array(buf$argnum);
+}

@@ -9,7 +9,9 @@
  * takes them) and acperf.Aircraft / acperf.Mission objects for the models, it
  * converts them, calls the C function through a one-line trampoline (generated
  * from the headers by gen_fastcall.py into fastcall_table.h) and returns a
- * float or the named result of the Python layer. Any other call (arrays, lists,
+ * float or the named result of the Python layer, its coded fields (the `codes`
+ * given by _core.py from the result type) as the IntEnum members the Python
+ * path gives. Any other call (arrays, lists,
  * Series, numpy integer scalars, raw SWIG handles, unknown or repeated
  * keywords, wrong argument counts, ints too large for a double) goes, unchanged,
  * to the Python function it was made from (`__wrapped__`), which has the array
@@ -122,6 +124,9 @@ typedef struct {
   PyObject *names;     /* tuple of the parameter names (interned), for keywords */
   PyObject *defaults;  /* tuple of the default objects of the trailing parameters */
   PyObject *result;    /* named result type (a tuple subtype) or NULL: one float */
+  PyObject *codes;     /* NULL, or a tuple, per output, of None or {value: IntEnum member}
+                          for the fields that hold a C enum value (a float key finds the
+                          member of that whole value; NaN and other values stay floats) */
   PyObject *spare[ACPF_SPARES]; /* the last named results, refilled when no one else holds them */
   int next_spare;      /* the slot the next new result takes */
   int nmin;            /* arguments without a default */
@@ -239,13 +244,32 @@ static int acpf_gather(const acpf_function *f, PyObject *const *args, Py_ssize_t
   return 1;
 }
 
-/* The named result: a tuple subtype without extra slots, of floats. When one
-   of the last results given is held by nothing but this function (the caller
-   let it go, took a field and dropped it, or stored the next one in its
-   place), it is refilled in place instead of a new one being made, as zip()
-   and enumerate() recycle their result tuples; so is each float in it that
-   nothing else holds. No one can tell the difference: the object is
-   unreachable but from here, and holds the values a new one would. */
+/* The dict of enum members of output i, or NULL when it is a plain number. */
+static inline PyObject *acpf_code_map(const acpf_function *f, int i) {
+  if (!f->codes) return NULL;
+  PyObject *map = PyTuple_GET_ITEM(f->codes, i);
+  return map == Py_None ? NULL : map;
+}
+
+/* Output i as an object (new reference): a float, or the enum member it codes. */
+static PyObject *acpf_output(const acpf_function *f, int i, double x) {
+  PyObject *v = PyFloat_FromDouble(x);
+  PyObject *map = acpf_code_map(f, i);
+  if (!v || !map || isnan(x)) return v;
+  PyObject *member = PyDict_GetItemWithError(map, v); /* borrowed */
+  if (!member && !PyErr_Occurred()) return v;          /* no member of that value */
+  Py_DECREF(v);
+  return member ? Py_NewRef(member) : NULL;
+}
+
+/* The named result: a tuple subtype without extra slots, of floats (and enum
+   members in the coded fields). When one of the last results given is held by
+   nothing but this function (the caller let it go, took a field and dropped
+   it, or stored the next one in its place), it is refilled in place instead of
+   a new one being made, as zip() and enumerate() recycle their result tuples;
+   so is each float in it that nothing else holds. No one can tell the
+   difference: the object is unreachable but from here, and holds the values a
+   new one would. */
 static PyObject *acpf_named(acpf_function *f, const double *out) {
   const int n = f->entry->nout;
   PyObject *r = NULL;
@@ -254,11 +278,11 @@ static PyObject *acpf_named(acpf_function *f, const double *out) {
   if (r) {
     for (int i = 0; i < n; i++) {
       PyObject *v = PyTuple_GET_ITEM(r, i);
-      if (Py_REFCNT(v) == 1 && PyFloat_CheckExact(v)) {
+      if (Py_REFCNT(v) == 1 && PyFloat_CheckExact(v) && !acpf_code_map(f, i)) {
         ((PyFloatObject *)v)->ob_fval = out[i];
         continue;
       }
-      PyObject *w = PyFloat_FromDouble(out[i]);
+      PyObject *w = acpf_output(f, i, out[i]);
       if (!w) return NULL;
       PyTuple_SET_ITEM(r, i, w);
       Py_DECREF(v);
@@ -269,7 +293,7 @@ static PyObject *acpf_named(acpf_function *f, const double *out) {
   r = type->tp_alloc(type, n);
   if (!r) return NULL;
   for (int i = 0; i < n; i++) {
-    PyObject *v = PyFloat_FromDouble(out[i]);
+    PyObject *v = acpf_output(f, i, out[i]);
     if (!v) {
       Py_DECREF(r);
       return NULL;
@@ -278,8 +302,9 @@ static PyObject *acpf_named(acpf_function *f, const double *out) {
   }
   /* Floats only: it can be in no reference cycle, so the cycle collector need not
      scan it (CPython untracks such tuples itself, but only when it meets them in
-     a collection; a notebook keeping 1e5 results would pay for those scans). */
-  PyObject_GC_UnTrack(r);
+     a collection; a notebook keeping 1e5 results would pay for those scans). With
+     enum members it stays tracked, as CPython would keep it. */
+  if (!f->codes) PyObject_GC_UnTrack(r);
   Py_XSETREF(f->spare[f->next_spare], Py_NewRef(r));
   f->next_spare = (f->next_spare + 1) % ACPF_SPARES;
   return r;
@@ -316,16 +341,16 @@ static const acpf_entry *acpf_find(const char *name) {
   return e->name ? e : NULL;
 }
 
-/* function(c_name, names, fallback, defaults, result): see _core.py. */
+/* function(c_name, names, fallback, defaults, result, codes=None): see _core.py. */
 static PyObject *acpf_new(PyTypeObject *type, PyObject *args, PyObject *kwds) {
   const char *name;
-  PyObject *names, *fallback, *defaults, *result;
+  PyObject *names, *fallback, *defaults, *result, *codes = Py_None;
   if (kwds && PyDict_GET_SIZE(kwds)) {
     PyErr_SetString(PyExc_TypeError, "function() takes positional arguments only");
     return NULL;
   }
-  if (!PyArg_ParseTuple(args, "sO!OO!O:function", &name, &PyTuple_Type, &names, &fallback,
-                        &PyTuple_Type, &defaults, &result))
+  if (!PyArg_ParseTuple(args, "sO!OO!O|O:function", &name, &PyTuple_Type, &names, &fallback,
+                        &PyTuple_Type, &defaults, &result, &codes))
     return NULL;
   const acpf_entry *e = acpf_find(name);
   if (!e) return NULL;
@@ -351,6 +376,18 @@ static PyObject *acpf_new(PyTypeObject *type, PyObject *args, PyObject *kwds) {
       return PyErr_Format(PyExc_TypeError, "%s: the result type must be a tuple subtype "
                           "without slots (a namedtuple)", name);
   }
+  if (codes == Py_None) {
+    codes = NULL;
+  } else {
+    if (!result || !PyTuple_Check(codes) || PyTuple_GET_SIZE(codes) != e->nout)
+      return PyErr_Format(PyExc_TypeError, "%s: codes must be a tuple of %d entries for a "
+                          "named result", name, e->nout);
+    for (int i = 0; i < e->nout; i++) {
+      PyObject *map = PyTuple_GET_ITEM(codes, i);
+      if (map != Py_None && !PyDict_CheckExact(map))
+        return PyErr_Format(PyExc_TypeError, "%s: each code is None or a dict", name);
+    }
+  }
   if (e->nin > ACPF_MAX_IN || e->nout > ACPF_MAX_OUT)
     return PyErr_Format(PyExc_ValueError, "%s: too many arguments for the fast path", name);
   PyObject *interned = PyTuple_New(e->nin);
@@ -375,6 +412,7 @@ static PyObject *acpf_new(PyTypeObject *type, PyObject *args, PyObject *kwds) {
   f->names = interned;
   f->defaults = Py_NewRef(defaults);
   f->result = Py_XNewRef(result);
+  f->codes = Py_XNewRef(codes);
   f->nmin = e->nin - (int)ndef;
   f->vectorcall = acpf_call;
   return (PyObject *)f;
@@ -385,6 +423,7 @@ static int acpf_traverse(acpf_function *f, visitproc visit, void *arg) {
   Py_VISIT(f->names);
   Py_VISIT(f->defaults);
   Py_VISIT(f->result);
+  Py_VISIT(f->codes);
   for (int k = 0; k < ACPF_SPARES; k++) Py_VISIT(f->spare[k]);
   Py_VISIT(f->dict);
   return 0;
@@ -395,6 +434,7 @@ static int acpf_clear(acpf_function *f) {
   Py_CLEAR(f->names);
   Py_CLEAR(f->defaults);
   Py_CLEAR(f->result);
+  Py_CLEAR(f->codes);
   for (int k = 0; k < ACPF_SPARES; k++) Py_CLEAR(f->spare[k]);
   Py_CLEAR(f->dict);
   return 0;

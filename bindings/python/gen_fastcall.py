@@ -18,7 +18,8 @@ takes the functions whose inputs are models first, then numbers:
 
 and writes one trampoline per function, `int f(const acpf_value *in, double *out)`,
 plus the table acpf_table[] (C name, input types, outputs and their names).
-Anything else (strings, sizes, arrays, other structs) stays with SWIG alone.
+Anything else (strings, sizes, arrays, other structs) stays with SWIG alone, and so
+do the functions of SWIG_ONLY.
 Nothing here computes: each trampoline is one call of the C function.
 """
 
@@ -64,6 +65,12 @@ def double_structs(texts):
     return structs
 
 
+# Functions that fit the rules but stay with SWIG: the trips, whose Python form reads
+# the reason of an infeasible trip from the output struct the SWIG error carries and
+# raises acperf.InfeasibleTrip (_cruise.py); a trip takes milliseconds, so the call
+# overhead does not matter.
+SWIG_ONLY = {"acp_trip", "acp_trip_for_zero_fuel_mass"}
+
 MODELS = {"const acp_aircraft*": "A", "const acp_mission*": "M"}
 ENUMS = ("rating", "mode", "end")  # arrays.i's enum-valued int parameters
 ARGUMENT = {"A": "(const acp_aircraft *)in[{0}].model", "M": "(const acp_mission *)in[{0}].model",
@@ -105,7 +112,7 @@ def main(interface, incdir, output):
             plist = params_of(params)
             codes = input_codes(plist)
             rest = plist[len(codes):]
-            if not codes or "d" not in codes:
+            if not codes or "d" not in codes or name in SWIG_ONLY:
                 continue
             call_in = ", ".join(ARGUMENT[c].format(i) for i, c in enumerate(codes))
             if ret == "double" and not rest:

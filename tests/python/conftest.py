@@ -106,7 +106,7 @@ class CLib:
             if ptype == "double":
                 argtypes.append(D)
                 cargs.append(D(next(values)))
-            elif ptype in ("const acp_aircraft*", "acp_aircraft*"):
+            elif ptype in ("const acp_aircraft*", "acp_aircraft*", "const acp_mission*"):
                 argtypes.append(ctypes.c_void_p)
                 cargs.append(next(values))
             elif ptype == "int":  # enum values (rating, mode): whole numbers
@@ -164,3 +164,13 @@ def close(a, b):
     """Array form against the scalar C function: the vectorised kernels (libmvec,
     docs/performance.md) agree within 1e-14 relative; NaN equal to NaN."""
     return same(a, b) or abs(a - b) <= 1e-14 * abs(b)
+
+
+def typed_as_documented(values, result_type=None):
+    """Each value a float, except in the coded fields of `result_type` (its `_enums`,
+    from the C enum each struct comment names): a member of that IntEnum, or a float
+    NaN where the C field is NaN (docs/python.md, "Enums")."""
+    enums = getattr(result_type, "_enums", ()) or (None,) * len(values)
+    return all(type(v) is float if e is None else
+               (type(v) is e or (type(v) is float and math.isnan(v)))
+               for v, e in zip(values, enums))

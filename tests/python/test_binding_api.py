@@ -21,7 +21,8 @@ import numpy as np
 import pytest
 
 import acperf
-from conftest import close, HEADERS, CStatusError, parse_headers, parse_structs, same
+from conftest import (close, HEADERS, CStatusError, parse_headers, parse_structs, same,
+                      typed_as_documented)
 
 # Sample values per C parameter name, valid and invalid ones (the last entries
 # of most lists are outside the documented ranges of the headers).
@@ -159,7 +160,7 @@ def test_scalar_and_array_paths_match_c(name, clib):
             want = as_tuple(ref, fields)
             got_t = tuple(got) if fields else (got,)
             assert all(same(g, w) for g, w in zip(got_t, want)), (pt, got, ref)
-            assert all(isinstance(g, float) for g in got_t)
+            assert typed_as_documented(got_t, type(got) if fields else None), got
         else:
             with pytest.raises(acperf.AcperfError) as err:
                 fn(*pt)

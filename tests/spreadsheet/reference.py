@@ -235,19 +235,20 @@ REASONS = {1: ("take-off mass above mass_max_takeoff", "kg"),
 
 
 def trip_status(ac, mi, zfm):
-    # The Python function (__wrapped__, docs/python.md): its AcperfError carries the
-    # trip as .result; the C fast path's error does not, which would leave only NOT_OK.
+    # The Python binding names the reason and the excess (acperf.InfeasibleTrip,
+    # docs/python.md); any other failure is NOT_OK.
     try:
-        acperf.trip_for_zero_fuel_mass.__wrapped__(ac, mi, zfm)
+        acperf.trip_for_zero_fuel_mass(ac, mi, zfm)
         return "OK"
-    except acperf.AcperfError as e:
-        r = getattr(e, "result", None)
-        if r is None or not math.isfinite(r.infeasible) or int(r.infeasible) not in REASONS:
+    except acperf.InfeasibleTrip as e:
+        if int(e.reason) not in REASONS:
             return NOT_OK
-        what, unit = REASONS[int(r.infeasible)]
-        if unit is None or not math.isfinite(r.excess):
+        what, unit = REASONS[int(e.reason)]
+        if unit is None or not math.isfinite(e.excess):
             return what
-        return f"{what} by {u.from_si(r.excess, unit):.0f} {unit}"
+        return f"{what} by {u.from_si(e.excess, unit):.0f} {unit}"
+    except acperf.AcperfError:
+        return NOT_OK
 
 
 # name: (aircraft?, function of the numeric/text arguments -> value or row)

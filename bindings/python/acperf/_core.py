@@ -34,11 +34,30 @@ import numpy as np
 
 from . import capi as _c
 from . import _fast
+from ._enums import coded
 
 AcperfError = _c.AcperfError
 AcperfError.__module__ = "acperf"
 _fast.set_error(AcperfError)
 _FAST_NAMES = frozenset(_fast.names())
+
+
+class InfeasibleTrip(AcperfError):
+    """A trip that cannot be flown, and why (acp_trip, acp_trip_for_zero_fuel_mass).
+
+    reason  the acperf.TripInfeasible member the library names
+    excess  by how much the limit is exceeded, a float in the unit TripInfeasible
+            documents (kg, m, or a lift coefficient; NaN where it has none)
+    result  the TripResult of the call: infeasible and excess, every other field NaN
+    status  the acp_status code (ACP_ERR_RANGE or ACP_ERR_THRUST)
+    """
+
+    def __init__(self, message, reason=None, excess=float("nan"), result=None, status=None):
+        super().__init__(message)
+        self.reason, self.excess, self.result, self.status = reason, excess, result, status
+
+
+InfeasibleTrip.__module__ = "acperf"
 
 
 class AcperfWarning(RuntimeWarning):
@@ -49,6 +68,15 @@ class Result:
     """Mixin of the named results (a namedtuple of floats or of arrays)."""
 
     __slots__ = ()
+
+    _enums = ()  # per field: the IntEnum of a coded field, else None (result_type)
+
+    @classmethod
+    def _from_c(cls, values):
+        """The result of the C outputs `values` (floats), coded fields as enum members."""
+        if not any(cls._enums):
+            return cls(*values)
+        return cls(*(coded(e, v) for e, v in zip(cls._enums, values)))
 
     def to_dict(self):
         """The fields as a dict, in field order."""
@@ -65,10 +93,19 @@ class Result:
         return pd.DataFrame({k: np.asarray(v).ravel() for k, v in data.items()}, index=index)
 
 
-def result_type(name, fields, doc):
-    """A named result: a namedtuple whose fields are the C struct's field names."""
+def result_type(name, fields, doc, codes=None):
+    """A named result: a namedtuple whose fields are the C struct's field names.
+
+    codes  {field: IntEnum} of the fields that hold a C enum value (acperf/_enums.py):
+           a scalar result gives the member there (a float NaN stays NaN)."""
+    codes = dict(codes or {})
+    unknown = set(codes) - set(fields)
+    if unknown:
+        raise ValueError(f"{name}: coded fields {sorted(unknown)} are not fields")
     base = collections.namedtuple(name, fields)
-    return type(name, (Result, base), {"__slots__": (), "__doc__": doc, "__module__": "acperf"})
+    return type(name, (Result, base), {
+        "__slots__": (), "__doc__": doc, "__module__": "acperf",
+        "_enums": tuple(codes.get(f) for f in fields)})
 
 
 def struct_fields(swig_type):
@@ -150,8 +187,8 @@ def bind(name, scalar, array=None, params=(), defaults=None, outputs=None, resul
     else:
         def finish(value, _result=result, _fields=result._fields):
             if isinstance(value, list):  # several out-pointers
-                return _result(*value)
-            return _result(*(getattr(value, f) for f in _fields))  # an output struct
+                return _result._from_c(value)
+            return _result._from_c([getattr(value, f) for f in _fields])  # an output struct
         code = _TEMPLATE
         namespace = {"_scalar": scalar, "_array": array_path, "_finish": finish,
                      "_model": model_handle}
@@ -175,7 +212,10 @@ def fast_path(fn, cname, params, defaults=(), result=None):
     the fields of `result`."""
     if cname not in _FAST_NAMES:
         return fn
-    fast = _fast.function(cname, params, fn, defaults, result)
+    codes = None
+    if result is not None and any(result._enums):
+        codes = tuple(None if e is None else dict(e._value2member_map_) for e in result._enums)
+    fast = _fast.function(cname, params, fn, defaults, result, codes)
     if result is not None and tuple(result._fields) != fast.fast_outputs:
         return fn
     fast.__dict__.update(fn.__dict__)  # c_function, c_array_function, c_models
@@ -232,8 +272,8 @@ def _array_call(fname, scalar, array, models, values, params, nulls, outputs, re
         if result is None:
             return out
         if isinstance(out, list):
-            return result(*out)
-        return result(*(getattr(out, f) for f in result._fields))
+            return result._from_c(out)
+        return result._from_c([getattr(out, f) for f in result._fields])
     n = int(np.prod(shape))
     if array is not None:
         flat = []
@@ -246,11 +286,13 @@ def _array_call(fname, scalar, array, models, values, params, nulls, outputs, re
             flat.append(np.ascontiguousarray(a).reshape(n))
         res = array(*models, *flat, *array_extra)
         bad, outs = res[0], res[1:]
+        kept = ()
     else:
-        bad, outs = _pointwise(scalar, models, arrays, shape, n, outputs)
+        bad, outs, kept = _pointwise(scalar, models, arrays, shape, n, outputs)
     if bad:
+        but = f" but for {', '.join(kept)}" if kept else ""
         warnings.warn(f"{fname}: {bad} of {n} points invalid (argument invalid or outside "
-                      "the model's valid range); their results are NaN",
+                      f"the model's valid range); their results are NaN{but}",
                       AcperfWarning, stacklevel=4)
     index = _series_index(values)
     names = outputs if outputs is not None else (None,)
@@ -268,17 +310,23 @@ def _array_call(fname, scalar, array, models, values, params, nulls, outputs, re
 
 
 def _pointwise(scalar, models, arrays, shape, n, outputs):
-    """Array path of a function without a C array form: one scalar call per point."""
+    """Array path of a function without a C array form: one scalar call per point.
+    A failed point is NaN, except for what its exception's `result` keeps (the
+    reason and excess of an infeasible trip: mission.h). Returns the count of
+    failed points, the outputs and the names of the fields such points kept."""
     flat = [np.broadcast_to(a, shape).reshape(n) for a in arrays]
     nout = 1 if outputs is None else len(outputs)
     outs = [np.full(n, np.nan) for _ in range(nout)]
-    bad = 0
+    bad, kept = 0, {}
     for i in range(n):
         try:
             r = scalar(*models, *(float(a[i]) for a in flat))
-        except AcperfError:
+        except AcperfError as exc:
             bad += 1
-            continue
+            r = getattr(exc, "result", None)
+            if r is None or outputs is None:
+                continue
+            kept.update((f, None) for f in outputs if not np.isnan(getattr(r, f)))
         if nout == 1:
             outs[0][i] = r
         elif isinstance(r, list):
@@ -287,4 +335,4 @@ def _pointwise(scalar, models, arrays, shape, n, outputs):
         else:
             for o, f in zip(outs, outputs):
                 o[i] = getattr(r, f)
-    return bad, outs
+    return bad, outs, tuple(kept)

@@ -8,6 +8,7 @@ function says CAS or Mach). Results are estimates, not approved data.
 
 from . import capi as _c
 from ._core import _array_call, bind, model_handle, result_type
+from ._enums import SpeedStability
 
 __all__ = ["SpeedSet", "GlideSet", "Stability", "StabilityBoundary", "speeds", "speeds_cas",
            "speeds_mach", "glide", "speed_stability", "speed_stability_boundary"]
@@ -21,7 +22,8 @@ GlideSet = result_type(
     "Glide performance (the fields of acp_glide_set).")
 Stability = result_type(
     "Stability", ("slope", "vmd", "stable"),
-    "Speed stability in level flight (the fields of acp_stability).")
+    "Speed stability in level flight (the fields of acp_stability); stable is a "
+    "SpeedStability.", {"stable": SpeedStability})
 StabilityBoundary = result_type(
     "StabilityBoundary", ("vmd_tas", "vmd_cas", "vmd_mach"),
     "The speed-stability boundary (VMD) as TAS, CAS and Mach (acp_speed_stability_boundary_n).")

@@ -8,7 +8,8 @@
 Keys, units (SI) and ranges are those of the C library (docs/aircraft-format.md);
 every check is the library's own: an unknown key, a value out of range or a
 malformed file raises AcperfError with the library's status text and, for files
-and text, its "line N: ..." message.
+and text, its "line N: ..." message. A key, text value, path or aircraft text with
+a NUL character is refused (AcperfError, ACP_ERR_INVALID): C would read it cut short.
 """
 
 from . import capi as _c
@@ -87,14 +88,10 @@ class Aircraft(_fast.model):
 
     # ---- keys ----------------------------------------------------------------
     def __getitem__(self, key):
-        if _is_text_key(key):
-            try:
-                return _c.acp_aircraft_get_text(self._handle, key)
-            except AcperfError as exc:
-                raise KeyError(key) from exc
+        get = _c.acp_aircraft_get_text if _is_text_key(key) else _c.acp_aircraft_get
         try:
-            return _c.acp_aircraft_get(self._handle, key)
-        except AcperfError as exc:
+            return get(self._handle, key)
+        except AcperfError as exc:  # a key with a NUL is refused, not unknown
             if exc.status == _c.ACP_ERR_UNKNOWN_KEY:
                 raise KeyError(key) from exc
             raise

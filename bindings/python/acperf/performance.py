@@ -12,6 +12,7 @@ import numpy as np
 
 from . import capi as _c
 from ._core import bind, model_handle, result_type
+from ._enums import AltitudeLimit, Limit, Rating, ScheduleMode
 
 __all__ = ["SchedulePoint", "EnginePoint", "ProfilePoint", "Profile", "CeilingSet",
            "MODE_LOW_CAS", "MODE_CAS", "MODE_MACH", "MODE_VMO", "MODE_MMO",
@@ -22,15 +23,17 @@ __all__ = ["SchedulePoint", "EnginePoint", "ProfilePoint", "Profile", "CeilingSe
            "descent_trace", "ceilings",
            "ClimbTable", "climb_table"]
 
-MODE_LOW_CAS, MODE_CAS, MODE_MACH = _c.ACP_MODE_LOW_CAS, _c.ACP_MODE_CAS, _c.ACP_MODE_MACH
-MODE_VMO, MODE_MMO = _c.ACP_MODE_VMO, _c.ACP_MODE_MMO
-RATING_MAXIMUM, RATING_CLIMB = _c.ACP_RATING_MAXIMUM, _c.ACP_RATING_CLIMB
-RATING_CRUISE, RATING_IDLE = _c.ACP_RATING_CRUISE, _c.ACP_RATING_IDLE
+# The C constants under their old Python names: the members of acperf.ScheduleMode, Rating.
+MODE_LOW_CAS, MODE_CAS, MODE_MACH = ScheduleMode.LOW_CAS, ScheduleMode.CAS, ScheduleMode.MACH
+MODE_VMO, MODE_MMO = ScheduleMode.VMO, ScheduleMode.MMO
+RATING_MAXIMUM, RATING_CLIMB = Rating.MAXIMUM, Rating.CLIMB
+RATING_CRUISE, RATING_IDLE = Rating.CRUISE, Rating.IDLE
 
 SchedulePoint = result_type(
     "SchedulePoint",
     ("mode", "cas", "mach", "tas", "crossover", "dtas_dhp", "acceleration_factor"),
-    "A speed schedule at one altitude (the fields of acp_schedule_point).")
+    "A speed schedule at one altitude (the fields of acp_schedule_point); mode is a "
+    "ScheduleMode.", {"mode": ScheduleMode})
 EnginePoint = result_type(
     "EnginePoint", ("thrust", "fuel_flow", "tsfc", "shaft_power"),
     "Thrust and fuel of all engines (the fields of acp_engine_point).")
@@ -38,19 +41,24 @@ ProfilePoint = result_type(
     "ProfilePoint",
     ("time", "distance", "hp", "mass", "tas", "cas", "mach", "rate", "gradient", "thrust",
      "drag", "fuel_flow", "acceleration_factor", "mode", "limit", "limit_excess"),
-    "One point of a climb or descent (the fields of acp_profile_point); in a trace each "
-    "field is an array over the points.")
+    "One point of a climb or descent (the fields of acp_profile_point); mode is a "
+    "ScheduleMode, limit a Limit; in a trace each field is an array over the points "
+    "(the codes as floats).", {"mode": ScheduleMode, "limit": Limit})
 Profile = result_type(
     "Profile",
     ("time", "distance", "fuel", "mass_end", "tas_end", "speed_change_time",
      "speed_change_distance", "speed_change_fuel", "limit", "limit_excess"),
-    "Totals of a climb or descent (the fields of acp_profile).")
+    "Totals of a climb or descent (the fields of acp_profile); limit is a Limit.",
+    {"limit": Limit})
 CeilingSet = result_type(
     "CeilingSet",
     ("service_ceiling", "max_climb_altitude", "buffet_altitude", "max_cruise_altitude",
      "optimum_altitude", "optimum_limit", "best_cruise_altitude", "best_cruise_limit",
      "max_cruise_limit"),
-    "Ceilings and optimum altitude at a mass (the fields of acp_ceiling_set).")
+    "Ceilings and optimum altitude at a mass (the fields of acp_ceiling_set); the *_limit "
+    "fields are AltitudeLimits.",
+    {"optimum_limit": AltitudeLimit, "best_cruise_limit": AltitudeLimit,
+     "max_cruise_limit": AltitudeLimit})
 
 _AC = ("ac",)
 
@@ -97,7 +105,7 @@ def _trace(cfunc, ac, mass, hp_start, hp_end, dtemp, wind, step):
                            float(dtemp), float(wind), float(step), capacity)
     points = np.asarray(points)
     trace = ProfilePoint(*(points[:, i].copy() for i in range(points.shape[1])))
-    return trace, Profile(*(getattr(totals, f) for f in Profile._fields))
+    return trace, Profile._from_c([getattr(totals, f) for f in Profile._fields])
 
 
 def climb_trace(ac, mass, hp_start, hp_end, dtemp=0.0, wind=0.0, step=0.0):
