@@ -367,7 +367,7 @@ static int profile(const acp_aircraft *ac, int descent, double mass, double h0, 
   int st = check_args(ac, mass, h0, h1, dtemp, wind, &step, relax, &lim);
   if (st == ACP_OK && (descent ? !(h1 < h0) : !(h1 > h0))) st = ACP_ERR_INVALID;
   if (st == ACP_OK) {
-    const phase ph = {ac, descent, dtemp, wind, perf_mass_floor(ac), &lim};
+    const phase ph = {ac, descent, dtemp, wind, perf_floor(ac, relax), &lim};
     st = integrate(&ph, mass, h0, h1, step, capacity, points, count, out);
   }
   if (st != ACP_OK) set_nan_profile(out);
@@ -403,7 +403,7 @@ static int speed_change(const acp_aircraft *ac, double mass, double hp, double d
   run r = {.cur = {.hp = hp, .mass = mass, .tas = v0, .time = 0.0, .distance = 0.0,
                    .mode = ACP_NAN}};
   if (st == ACP_OK && v1 != v0) {
-    const phase ph = {ac, v1 < v0, dtemp, wind, perf_mass_floor(ac), &lim};
+    const phase ph = {ac, v1 < v0, dtemp, wind, perf_floor(ac, relax), &lim};
     st = speed_segment(&ph, &r, v1, ACP_NAN);
   }
   if (st == ACP_OK) {

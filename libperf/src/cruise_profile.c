@@ -241,7 +241,7 @@ static int run(const acp_aircraft *ac, int mode, double cost_index, double mass,
   r.buffet_min = ACP_NAN;
   int st = cruise_check(ac, mode, cost_index, mass, wind);
   if (st == ACP_OK) {
-    r.mass_floor = relax & PERF_RELAX_FLOOR ? ACP_POLAR_MASS_MIN : perf_mass_floor(ac);
+    r.mass_floor = perf_floor(ac, relax);
     st = cruise_cond_at(&r.c, ac, hp, dtemp, wind);
   }
   if (st == ACP_OK && perf_envelope(ac, mass, hp, relax, &r.lim) != ACP_OK) st = ACP_ERR_RANGE;

@@ -18,6 +18,10 @@
 #define TOD_TOL 1.0            /* m: the descent's distance settles */
 #define ZFM_ITERATIONS ACP_TRIP_MASS_ITERATIONS
 #define ZFM_TOL 0.1            /* kg: zero-fuel mass match (issue 4) */
+/* The segments of a trip are flown without the take-off mass limit and the
+   empty-mass floor (down to the model's 1 kg): the trip checks its take-off,
+   landing and zero-fuel masses itself, with the excess of the whole trip. */
+#define TRIP_RELAX (PERF_RELAX_MTOW | PERF_RELAX_FLOOR)
 #define TAXI_SPEED 5.0         /* m/s (about 10 kt) for the idle fuel flow of taxiing */
 
 enum mkey {
@@ -182,7 +186,7 @@ static int change(const acp_aircraft *ac, const acp_mission *ms, double mass, do
     return ACP_OK;
   }
   return perf_speed_change(ac, mass, hp, ms->v[MK_ISA_DEVIATION], ms->v[MK_WIND], v0, v1,
-                           PERF_RELAX_MTOW, p);
+                           TRIP_RELAX, p);
 }
 
 /* The segments of a trip (docs/methods/trip.md). */
@@ -202,7 +206,8 @@ static int descend(const acp_aircraft *ac, const acp_mission *ms, double mass, d
   const double h_end = v[MK_DESTINATION_ALTITUDE] + v[MK_DESCENT_END_HEIGHT];
   acp_profile_point top;
   int st = acp_descent_point(ac, mass, h_tod, dtemp, wind, &top);
-  if (st == ACP_ERR_RANGE && top.limit == ACP_LIMIT_MASS_MAX_TAKEOFF) { /* relaxed in the trip */
+  if (st == ACP_ERR_RANGE && (top.limit == ACP_LIMIT_MASS_MAX_TAKEOFF ||
+                              top.limit == ACP_LIMIT_MASS_OPERATING_EMPTY)) { /* relaxed in the trip */
     no_change(&l->decelerate, mass, v_cruise);
     st = ACP_OK;
   } else if (st == ACP_OK) {
@@ -210,7 +215,7 @@ static int descend(const acp_aircraft *ac, const acp_mission *ms, double mass, d
   }
   if (st != ACP_OK) return segment_error(o, st, l->decelerate.limit, l->decelerate.limit_excess);
   st = perf_profile(ac, 1, l->decelerate.mass_end, h_tod, h_end, dtemp, wind, v[MK_CLIMB_STEP],
-                    PERF_RELAX_MTOW, &l->descent);
+                    TRIP_RELAX, &l->descent);
   if (st != ACP_OK) return segment_error(o, st, l->descent.limit, l->descent.limit_excess);
   const double vapp = ac_value(ac, AK_APPROACH_CAS);
   const double tas_app = isnan(vapp) ? ACP_NAN : acp_cas_to_tas(vapp, h_end, dtemp);
@@ -231,7 +236,7 @@ static int climb_up(const acp_aircraft *ac, const acp_mission *ms, double tow, a
   const double *v = ms->v;
   const double hc = v[MK_CRUISE_ALTITUDE], dtemp = v[MK_ISA_DEVIATION], wind = v[MK_WIND];
   int st = perf_profile(ac, 0, tow, v[MK_ORIGIN_ALTITUDE], hc, dtemp, wind, v[MK_CLIMB_STEP],
-                        PERF_RELAX_MTOW, &l->climb);
+                        TRIP_RELAX, &l->climb);
   if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CLIMB, ACP_NAN);
   if (st != ACP_OK) return segment_error(o, st, l->climb.limit, l->climb.limit_excess);
   cruise_cond c;
@@ -292,7 +297,7 @@ static int fly(const acp_aircraft *ac, const acp_mission *ms, double tow, acp_tr
     } else {
       st = perf_cruise(ac, mode, v[MK_COST_INDEX], m_cruise, hc, dtemp, wind,
                        ACP_CRUISE_END_DISTANCE, d_cruise, trip_cruise_step(v[MK_CRUISE_STEP], d_cruise),
-                       v[MK_STEP_CLIMB], PERF_RELAX_MTOW, cr);
+                       v[MK_STEP_CLIMB], TRIP_RELAX, cr);
       if (st != ACP_OK) return segment_error(o, st, cr->limit, cr->limit_excess);
     }
     m_tod = cr->mass_end;
@@ -336,9 +341,9 @@ static int reserves(const acp_aircraft *ac, const acp_mission *ms, acp_trip_resu
   o->contingency_fuel = fmax(v[MK_CONTINGENCY_FRACTION] * o->trip_fuel, v[MK_CONTINGENCY_MINIMUM]);
   o->alternate_fuel = v[MK_ALTERNATE_FUEL];
   const double m_hold = o->landing_mass - o->contingency_fuel - o->alternate_fuel;
-  const double floor_ = perf_mass_floor(ac);
-  if (!(m_hold > floor_))
-    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_BELOW_OPERATING_EMPTY, floor_ - m_hold);
+  if (!(m_hold > ACP_POLAR_MASS_MIN))
+    return infeasible(o, ACP_ERR_RANGE, ACP_TRIP_BELOW_OPERATING_EMPTY,
+                      perf_mass_floor(ac) - m_hold);
   double fr = 0.0;
   if (v[MK_FINAL_RESERVE_TIME] > 0.0) {
     acp_cruise_result h;
@@ -346,7 +351,7 @@ static int reserves(const acp_aircraft *ac, const acp_mission *ms, acp_trip_resu
                                v[MK_DESTINATION_ALTITUDE] + v[MK_HOLDING_HEIGHT],
                                v[MK_ISA_DEVIATION], 0.0, ACP_CRUISE_END_TIME,
                                v[MK_FINAL_RESERVE_TIME], 0.0, 0.0,
-                               PERF_RELAX_MTOW | PERF_RELAX_FLOOR, &h);
+                               TRIP_RELAX, &h);
     if (st != ACP_OK) return segment_error(o, st, h.limit, h.limit_excess);
     fr = h.fuel;
   }

@@ -33,6 +33,10 @@ double perf_sar(const acp_aircraft *ac, double mass, const acp_atmos *at, double
   return (tas + wind) / e.fuel_flow;
 }
 
+double perf_floor(const acp_aircraft *ac, unsigned relax) {
+  return relax & PERF_RELAX_FLOOR ? ACP_POLAR_MASS_MIN : perf_mass_floor(ac);
+}
+
 void perf_limit_report(int st, const perf_limit *lim, double *code, double *excess) {
   const int named = st == ACP_ERR_RANGE && lim->code > 0.0;
   *code = st == ACP_OK ? ACP_LIMIT_NONE : named ? lim->code : ACP_NAN;
@@ -55,7 +59,7 @@ int perf_envelope(const acp_aircraft *ac, double mass, double hp, unsigned relax
   lim->code = ACP_LIMIT_NONE;
   lim->excess = 0.0;
   const double mtow = ac_value(ac, AK_MASS_MAX_TAKEOFF);
-  const double floor_ = relax & PERF_RELAX_FLOOR ? ACP_POLAR_MASS_MIN : perf_mass_floor(ac);
+  const double floor_ = perf_floor(ac, relax);
   const double top = ac_value(ac, AK_MAX_ALTITUDE);
   if (mass > mtow && !(relax & PERF_RELAX_MTOW)) return exceeded(lim, ACP_LIMIT_MASS_MAX_TAKEOFF, mass - mtow);
   if (mass < floor_) return exceeded(lim, ACP_LIMIT_MASS_OPERATING_EMPTY, floor_ - mass);

@@ -35,9 +35,13 @@ double perf_mass_floor(const acp_aircraft *ac);
 /* What the trip relaxes while it iterates on the take-off mass (it reports a
    take-off mass above the limit itself, with the excess). */
 #define PERF_RELAX_MTOW 1u
-/* ... and the empty-mass floor of the final-reserve holding (the trip checks
-   the zero-fuel mass it ends at itself). */
+/* ... and the empty-mass floor of its segments and of the final-reserve
+   holding (the trip checks the zero-fuel mass it ends at itself, so that the
+   excess below the empty mass is that of the whole trip). */
 #define PERF_RELAX_FLOOR 2u
+
+/* perf_mass_floor(), or ACP_POLAR_MASS_MIN when relax has PERF_RELAX_FLOOR. */
+double perf_floor(const acp_aircraft *ac, unsigned relax);
 
 /* The aircraft's limits on a mass and a pressure altitude (keys that are given;
    hp NaN skips the altitude): ACP_OK with lim NONE, or ACP_ERR_RANGE with lim set. */
