@@ -176,7 +176,8 @@ CRUISE_RESULT = [Out("time", "min", "time min"), Out("distance", "NM", "distance
 # each has a _time, _distance and _fuel field.
 TRIP_SEGMENTS = ("climb", "climb_acceleration", "cruise", "descent_deceleration", "descent",
                  "approach_deceleration")
-_TRIP_UNITS = {"infeasible": None, "excess": None, "trip_time": "min", "block_time": "min",
+_TRIP_UNITS = {"infeasible": None, "excess": None, "excess_at_least": None, "trip_time": "min",
+               "block_time": "min",
                "cruise_altitude_end": "ft", "cruise_sar_mean": "NM/t", "iterations": None}
 _TRIP_UNITS.update({f"{s}_{q}": u for s in TRIP_SEGMENTS
                     for q, u in (("time", "min"), ("distance", "NM"), ("fuel", "kg"))})
@@ -189,7 +190,7 @@ TRIP = [Out(f, _TRIP_UNITS.get(f, "kg"), f.replace("_", " ")) for f in (
     "cruise_altitude_end", "cruise_sar_mean", "iterations", "climb_acceleration_time",
     "climb_acceleration_distance", "climb_acceleration_fuel", "descent_deceleration_time",
     "descent_deceleration_distance", "descent_deceleration_fuel", "approach_deceleration_time",
-    "approach_deceleration_distance", "approach_deceleration_fuel")]
+    "approach_deceleration_distance", "approach_deceleration_fuel", "excess_at_least")]
 
 # Cruise speed modes by name (enum acp_cruise_mode of acperf/cruise.h).
 CRUISE_MODES = {"fixed_mach": 1, "max_range": 2, "long_range": 3, "economy": 4,

@@ -19,6 +19,9 @@ from xml.sax.saxutils import escape
 sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
 import functions as T  # noqa: E402
 
+# Where excess_at_least lies in the trip result (the status functions read it).
+AT_LEAST = [o.field for o in T.TRIP].index("excess_at_least")
+
 CAUTION = ("Engineering estimates, not approved flight-manual data: operational use "
            "defers to the aircraft's approved data, the operator's approved procedures "
            "and the local aviation authority's rules.")
@@ -473,7 +476,8 @@ def vba_tables():
         L.append(f"    Case \"{k}\": acpMissionUnit = \"{unit or ''}\"")
     L += ["    Case Else: acpMissionUnit = \"?\"", "    End Select", "End Function", "",
           "' Why a trip is infeasible (acp_trip_result.infeasible and excess), as text.",
-          "Private Function acpInfeasible(ByVal code As Double, ByVal excess As Double) As String",
+          "Private Function acpInfeasible(ByVal code As Double, ByVal excess As Double, _",
+          "                               ByVal atLeast As Double) As String",
           "    Dim what As String, unit As String, v As Variant",
           "    Select Case code"]
     for code, (what, unit) in T.TRIP_INFEASIBLE.items():
@@ -482,7 +486,8 @@ def vba_tables():
           "    acpInfeasible = what",
           "    If unit <> \"\" And Not acpIsNaN(excess) Then",
           "        v = acpFromSI(excess, unit)",
-          "        If Not IsError(v) Then acpInfeasible = what & \" by \" & Format$(v, \"0\") & \" \" & unit",
+          "        If atLeast = 1 Then what = what & \" by at least\" Else what = what & \" by\"",
+          "        If Not IsError(v) Then acpInfeasible = what & \" \" & Format$(v, \"0\") & \" \" & unit",
           "    End If",
           "End Function", ""]
     return "\n".join(L)
@@ -574,7 +579,7 @@ def vba_wrapper(fn):
                  f"        If st = ACP_OK Then",
                  f"            {fn.name} = \"OK\"",
                  f"        ElseIf Not acpIsNaN(o(0)) And o(0) > 0 Then",
-                 f"            {fn.name} = acpInfeasible(o(0), o(1))",
+                 f"            {fn.name} = acpInfeasible(o(0), o(1), o({AT_LEAST}))",
                  "        Else",
                  f"            {fn.name} = acpText(c_acp_strerror(st))",
                  "        End If",

@@ -135,6 +135,7 @@ static int infeasible(acp_trip_result *o, int st, int why, double excess) {
   result_nan(o);
   o->infeasible = why;
   o->excess = excess;
+  o->excess_at_least = 0.0;
   return st;
 }
 
@@ -367,6 +368,7 @@ static int reserves(const acp_aircraft *ac, const acp_mission *ms, acp_trip_resu
   o->block_time = v[MK_TAXI_TIME] + o->trip_time;
   o->infeasible = ACP_TRIP_FEASIBLE;
   o->excess = ACP_NAN;
+  o->excess_at_least = 0.0;
   o->iterations = 1.0;
   return ACP_OK;
 }
@@ -440,7 +442,7 @@ int acp_trip_for_zero_fuel_mass(const acp_aircraft *ac, const acp_mission *missi
   /* g(tow) = zero-fuel mass of the trip flown from tow, less the wanted one;
      g rises with tow at a slope a little below 1. Start from below (the
      take-off mass is at least the zero-fuel mass plus the alternate fuel). */
-  const double mtow = ac_value(ac, AK_MASS_MAX_TAKEOFF), cap = ac_value(ac, AK_FUEL_CAPACITY);
+  const double mtow = ac_value(ac, AK_MASS_MAX_TAKEOFF);
   double tow = zero_fuel_mass + mission->v[MK_ALTERNATE_FUEL], tow_prev = ACP_NAN,
          g_prev = ACP_NAN;
   for (int k = 1; k <= ZFM_ITERATIONS; ++k) {
@@ -455,8 +457,11 @@ int acp_trip_for_zero_fuel_mass(const acp_aircraft *ac, const acp_mission *missi
     }
     /* a trip that cannot be flown from a take-off mass above the limit: the
        mass needed is above it by at least that much */
-    if (st != ACP_OK && tow > mtow)
-      return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_TAKEOFF, tow - mtow);
+    if (st != ACP_OK && tow > mtow) {
+      infeasible(out, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_TAKEOFF, tow - mtow);
+      out->excess_at_least = 1.0;
+      return ACP_ERR_RANGE;
+    }
     if (st != ACP_OK) {
       if (isnan(out->infeasible)) result_nan(out);
       return st;
@@ -482,16 +487,7 @@ int acp_trip_for_zero_fuel_mass(const acp_aircraft *ac, const acp_mission *missi
     }
     tow_prev = tow;
     g_prev = g;
-    const double next = tow - g / (slope > 0.1 ? slope : 1.0);
-    /* Found impossible early (mission.h): heavier still than a take-off mass
-       already above the limit, or more fuel still than a block fuel already
-       above the capacity; the excess is that of the secant estimate next. */
-    if (next > tow && tow > mtow)
-      return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_OVER_MAX_TAKEOFF, next - mtow);
-    if (next > tow && out->block_fuel > cap)
-      return infeasible(out, ACP_ERR_RANGE, ACP_TRIP_OVER_FUEL_CAPACITY,
-                        out->block_fuel + (next - tow) - cap);
-    tow = next;
+    tow -= g / (slope > 0.1 ? slope : 1.0);
   }
   result_nan(out);
   return ACP_ERR_NO_CONVERGENCE;

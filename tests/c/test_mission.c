@@ -466,18 +466,30 @@ static void test_work_bounds(void **state) {
   acp_trip_result coarse;
   assert_int_equal(acp_trip(ac, m, 38000, &coarse), ACP_OK);
   CHECK_CLOSE(fine.trip_fuel, coarse.trip_fuel, 0.0, 1e-5, "capped step against the default");
-  /* found impossible early, for the right reason */
+  /* impossible, for the right reason: the aircraft cannot fly at the take-off
+     mass it would need, so the excess is a lower bound, flagged */
   assert_int_equal(acp_mission_set(m, "distance", 9.9e6), ACP_OK);
   acp_trip_result far;
   assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 30000, &far), ACP_ERR_RANGE);
   CHECK_CLOSE(far.infeasible, ACP_TRIP_OVER_MAX_TAKEOFF, 0.0, 0.0, "9,900 km: above MTOW");
   assert_true(far.excess > 0.0);
-  /* over the fuel capacity first when the take-off mass limit is lifted */
+  CHECK_CLOSE(far.excess_at_least, 1.0, 0.0, 0.0, "a lower bound");
+  /* a trip that can be flown above the limit: the excess is exact, the take-off
+     mass the same aircraft without the limit needs, less the limit */
+  assert_int_equal(acp_mission_set(m, "distance", 4.5e6), ACP_OK);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 32000, &far), ACP_ERR_RANGE);
+  CHECK_CLOSE(far.infeasible, ACP_TRIP_OVER_MAX_TAKEOFF, 0.0, 0.0, "4,500 km: above MTOW");
+  CHECK_CLOSE(far.excess_at_least, 0.0, 0.0, 0.0, "an exact excess");
+  acp_aircraft *free_ac = aircraft_without_limits(ac);
+  acp_trip_result need;
+  assert_int_equal(acp_trip_for_zero_fuel_mass(free_ac, m, 32000, &need), ACP_OK);
+  CHECK_CLOSE(far.excess, need.takeoff_mass - 40000.0, 0.2, 0.0, "the excess of the converged trip");
+  acp_aircraft_free(free_ac);
+  /* over the fuel capacity when the take-off mass limit is lifted */
   assert_int_equal(acp_aircraft_unset(ac, "mass_max_takeoff"), ACP_OK);
-  assert_int_equal(acp_mission_set(m, "distance", 6.0e6), ACP_OK);
-  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 26000, &far), ACP_ERR_RANGE);
-  CHECK_CLOSE(far.infeasible, ACP_TRIP_OVER_FUEL_CAPACITY, 0.0, 0.0, "6,000 km: over capacity");
-  assert_true(far.excess > 0.0);
+  assert_int_equal(acp_trip_for_zero_fuel_mass(ac, m, 32000, &far), ACP_ERR_RANGE);
+  CHECK_CLOSE(far.infeasible, ACP_TRIP_OVER_FUEL_CAPACITY, 0.0, 0.0, "4,500 km: over capacity");
+  CHECK_CLOSE(far.excess, need.block_fuel - 9000.0, 0.2, 0.0, "by the converged block fuel");
   acp_mission_free(m);
   acp_aircraft_free(ac);
 }

@@ -91,9 +91,12 @@ def test_infeasible_trip_carries_the_libraries_reason_excess_and_result(clib, fn
         r = exc.result
         assert type(r) is acperf.TripResult and r.infeasible is exc.reason, label
         assert r.excess == exc.excess or math.isnan(r.excess) and math.isnan(exc.excess)
-        others = [getattr(r, f) for f in r._fields if f not in ("infeasible", "excess")]
+        others = [getattr(r, f) for f in r._fields
+                  if f not in ("infeasible", "excess", "excess_at_least")]
         assert all(type(v) is float and math.isnan(v) for v in others), label
-        assert all(math.isnan(want[f]) for f in r._fields if f not in ("infeasible", "excess"))
+        assert r.excess_at_least == want["excess_at_least"] and r.excess_at_least in (0.0, 1.0)
+        assert all(math.isnan(want[f]) for f in r._fields
+                   if f not in ("infeasible", "excess", "excess_at_least"))
         # the message: short, names the function, the argument and its value, no address
         msg = str(exc)
         param = "takeoff_mass" if fname == "trip" else "zero_fuel_mass"
@@ -104,8 +107,10 @@ def test_infeasible_trip_carries_the_libraries_reason_excess_and_result(clib, fn
 def test_the_message_says_which_limit_and_by_how_much(clib):
     # The brief's example: the take-off mass found for a zero-fuel mass exceeds
     # mass_max_takeoff; the message gives the excess of acp_trip_result and the limit.
-    mission = acperf.Mission(distance=1.0e7, cruise_altitude=FL350)
+    # (4,500 km: the trip can be flown above the limit, so the excess is exact)
+    mission = acperf.Mission(distance=4.5e6, cruise_altitude=FL350)
     _, want = c_trip(clib, "trip_for_zero_fuel_mass", mission, 32000.0)
+    assert want["excess_at_least"] == 0.0
     with pytest.raises(acperf.InfeasibleTrip) as err:
         acperf.trip_for_zero_fuel_mass(JET, mission, 32000.0)
     assert str(err.value) == (
@@ -153,7 +158,7 @@ def test_array_trip_gives_reason_and_excess_per_row(clib):
         got = acperf.trip(JET, mission, masses)
     assert [str(w.message) for w in caught if issubclass(w.category, acperf.AcperfWarning)] == [
         "trip: 2 of 4 points invalid (argument invalid or outside the model's valid range); "
-        "their results are NaN but for infeasible, excess"]
+        "their results are NaN but for infeasible, excess, excess_at_least"]
     for i, mass in enumerate(masses):
         status, want = c_trip(clib, "trip", mission, float(mass))
         assert got.infeasible[i] == want["infeasible"]
@@ -179,3 +184,17 @@ def test_a_feasible_trip_says_feasible_on_every_path(clib):
         r = call(JET, mission, 36000.0)
         assert r.infeasible is acperf.TripInfeasible.FEASIBLE, label
         assert r.trip_fuel == want["trip_fuel"], label
+
+
+def test_a_lower_bound_says_at_least():
+    """A trip that cannot be flown from an iterate above mass_max_takeoff stops with
+    the excess of that iterate, a lower bound (mission.h: excess_at_least = 1); the
+    message says so. 6,000 km from a 32 t zero-fuel mass: the demo jet cannot cruise at
+    the take-off mass it would need."""
+    ac = acperf.Aircraft.from_file(demo_aircraft_path("regional_jet.toml"))
+    with pytest.raises(acperf.InfeasibleTrip) as info:
+        acperf.trip_for_zero_fuel_mass(ac, acperf.Mission(distance=6.0e6, cruise_altitude=10668.0),
+                                       32000.0)
+    assert info.value.reason is acperf.TripInfeasible.OVER_MAX_TAKEOFF
+    assert info.value.result.excess_at_least == 1.0
+    assert "by at least" in str(info.value)

@@ -246,7 +246,8 @@ def trip_status(ac, mi, zfm):
         what, unit = REASONS[int(e.reason)]
         if unit is None or not math.isfinite(e.excess):
             return what
-        return f"{what} by {u.from_si(e.excess, unit):.0f} {unit}"
+        by = "by at least" if e.result.excess_at_least == 1.0 else "by"
+        return f"{what} {by} {u.from_si(e.excess, unit):.0f} {unit}"
     except acperf.AcperfError:
         return NOT_OK
 

@@ -61,7 +61,7 @@ TripResult = result_type(
      "cruise_altitude_end", "cruise_sar_mean", "iterations", "climb_acceleration_time",
      "climb_acceleration_distance", "climb_acceleration_fuel", "descent_deceleration_time",
      "descent_deceleration_distance", "descent_deceleration_fuel", "approach_deceleration_time",
-     "approach_deceleration_distance", "approach_deceleration_fuel"),
+     "approach_deceleration_distance", "approach_deceleration_fuel", "excess_at_least"),
     "A trip and its fuel (the fields of acp_trip_result); infeasible is a TripInfeasible "
     "(FEASIBLE for a trip flown).", {"infeasible": TripInfeasible})
 
@@ -159,12 +159,12 @@ def _figure(x, unit):
     return f"{text} {unit}" if unit else text
 
 
-def _infeasible_message(fname, param, mass, reason, excess, ac, mission):
+def _infeasible_message(fname, param, mass, reason, excess, at_least, ac, mission):
     """fname(param=mass kg): why, by how much (the limit's key = its value)."""
     text, model, key, unit = _INFEASIBLE[reason]
     message = f"{fname}({param}={_figure(mass, 'kg')}): {text}"
     if np.isfinite(excess):
-        message += f" by {_figure(excess, unit)}"
+        message += f" by {'at least ' if at_least == 1.0 else ''}{_figure(excess, unit)}"
     if key is not None:
         try:
             value = (_c.acp_aircraft_get(ac, key) if model == "A"
@@ -195,8 +195,8 @@ def _trip_form(cfunc, fname, param):
             if not isinstance(reason, TripInfeasible) or reason == TripInfeasible.FEASIBLE:
                 exc.result = result
                 raise
-            message = _infeasible_message(fname, param, mass, reason, result.excess, ac,
-                                          mission)
+            message = _infeasible_message(fname, param, mass, reason, result.excess,
+                                          result.excess_at_least, ac, mission)
             raise InfeasibleTrip(message, reason, result.excess, result, exc.status) from None
 
     return call

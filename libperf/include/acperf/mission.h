@@ -141,6 +141,8 @@ typedef struct {
                                            the descent (0 without approach_cas) */
   double approach_deceleration_distance; /**< m of it */
   double approach_deceleration_fuel;     /**< kg of it */
+  double excess_at_least; /**< 1 when `excess` is only a lower bound (a trip that cannot be flown
+                               from a take-off mass above mass_max_takeoff), else 0 */
 } acp_trip_result;
 
 /** A mission with the typical defaults; NULL when out of memory. Free with acp_mission_free(). */
@@ -176,7 +178,7 @@ ACP_API int acp_mission_get(const acp_mission *mission, const char *key, double 
  *                     keys (and cruise_mach for the fixed-Mach mode)
  * @param mission      the mission (distance and cruise_altitude set)
  * @param takeoff_mass kg
- * @param out          out: the trip; on error all NaN except `infeasible`
+ * @param out          out: the trip; on error all NaN except `infeasible`, `excess_at_least`
  *                     and `excess` for the errors the enum names
  * @return ACP_OK; ACP_ERR_INVALID (NULL, NaN/Inf, incomplete aircraft,
  *         distance or cruise_altitude not set); ACP_ERR_RANGE (a limit, the
@@ -195,13 +197,12 @@ ACP_API int acp_trip(const acp_aircraft *ac, const acp_mission *mission, double 
  * (secant steps on the zero-fuel-mass mismatch, starting from fixed-point
  * steps) until the trip's zero-fuel mass matches to 0.1 kg.
  *
- * An impossible trip is found early: when an iterate's take-off mass is
- * already above mass_max_takeoff, or its block fuel above fuel_capacity, and
- * the next iterate needs more still, the call stops with that reason; the
- * excess is then the secant estimate of the next iterate less the limit (an
- * estimate, not a converged figure). A trip that cannot be flown at all from
- * an iterate above mass_max_takeoff is ACP_TRIP_OVER_MAX_TAKEOFF with the
- * excess of that iterate (a lower bound).
+ * Inside the iteration the take-off mass limit and the empty-mass floor are
+ * relaxed, so that a converged trip reports the exact excess of the first
+ * limit it exceeds. A trip that cannot be flown at all from an iterate above
+ * mass_max_takeoff (the aircraft cannot climb or cruise that heavy) stops
+ * there as ACP_TRIP_OVER_MAX_TAKEOFF with the excess of that iterate: a lower
+ * bound, flagged by excess_at_least = 1.
  *
  * Work: at most ACP_TRIP_MASS_ITERATIONS trips, each at most
  * ACP_TRIP_DESCENT_ITERATIONS cruises of at most ACP_TRIP_CRUISE_STEPS_MAX

@@ -286,7 +286,8 @@ def trip_status(fn, ac, mission, si):
             what, unit = TRIP_INFEASIBLE[int(code)]
             excess = getattr(r, "excess", math.nan)
             if unit is not None and math.isfinite(excess):
-                return f"{what} by {from_si(excess, unit):.0f} {unit}"
+                by = "by at least" if getattr(r, "excess_at_least", 0.0) == 1.0 else "by"
+                return f"{what} {by} {from_si(excess, unit):.0f} {unit}"
             return what
         return str(e)
 
