@@ -27,6 +27,47 @@ static int acpy_is_field_getter(const char *symname) {
   return len > 4 && strcmp(symname + len - 4, "_get") == 0;
 }
 
+/* One argument as the message shows it: a model handle by what it is (never
+   its address), anything else by its repr. */
+static PyObject *acpy_show_arg(PyObject *arg) {
+  if (SwigPyObject_Check(arg)) {
+    const swig_type_info *ty = ((SwigPyObject *)arg)->ty;
+    const char *name = ty && ty->name ? ty->name : "";
+    return PyUnicode_FromString(strstr(name, "acp_aircraft") ? "<aircraft>"
+                                : strstr(name, "acp_mission") ? "<mission>" : "<object>");
+  }
+  return PyObject_Repr(arg);
+}
+
+/* "(a, b, ...)" of a call's arguments. */
+static PyObject *acpy_show_args(PyObject *args) {
+  if (!args) return PyUnicode_FromString("()");
+  if (!PyTuple_Check(args)) {
+    PyObject *one = acpy_show_arg(args);
+    PyObject *text = one ? PyUnicode_FromFormat("(%U)", one) : NULL;
+    Py_XDECREF(one);
+    return text;
+  }
+  PyObject *parts = PyList_New(0);
+  if (!parts) return NULL;
+  for (Py_ssize_t i = 0; i < PyTuple_GET_SIZE(args); ++i) {
+    PyObject *one = acpy_show_arg(PyTuple_GET_ITEM(args, i));
+    if (!one || PyList_Append(parts, one) < 0) {
+      Py_XDECREF(one);
+      Py_DECREF(parts);
+      return NULL;
+    }
+    Py_DECREF(one);
+  }
+  PyObject *sep = PyUnicode_FromString(", ");
+  PyObject *joined = sep ? PyUnicode_Join(sep, parts) : NULL;
+  Py_XDECREF(sep);
+  Py_DECREF(parts);
+  PyObject *text = joined ? PyUnicode_FromFormat("(%U)", joined) : NULL;
+  Py_XDECREF(joined);
+  return text;
+}
+
 /* "<function><arguments>: <status text>[: <detail>]" for a failed scalar call. */
 static void acpy_raise_call_detail(const char *function, PyObject *args, int status,
                                    const char *detail);
@@ -41,8 +82,7 @@ static void acpy_raise_call_detail(const char *function, PyObject *args, int sta
                   acp_strerror(ACP_ERR_RANGE));
   else
     PyOS_snprintf(text, sizeof text, "%s", acp_strerror(status));
-  PyObject *shown = args && PyTuple_Check(args) ? PyObject_Repr(args)
-                    : args ? PyUnicode_FromFormat("(%R)", args) : PyUnicode_FromString("()");
+  PyObject *shown = acpy_show_args(args);
   if (!shown) return;
   PyObject *message = detail && detail[0]
       ? PyUnicode_FromFormat("%s%U: %s: %s", function, shown, text, detail)

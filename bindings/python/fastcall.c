@@ -134,15 +134,16 @@ typedef struct {
   vectorcallfunc vectorcall;
 } acpf_function;
 
-/* How SWIG shows an argument in an error: a model as its SWIG handle. */
+/* How errors.i shows an argument in an error: a model by what it is (never its
+   address), anything else by its repr. */
 static PyObject *acpf_shown(const acpf_entry *e, int i, PyObject *v) {
-  if (e->types[i] == 'A' || e->types[i] == 'M') return PyObject_GetAttrString(v, "_handle");
-  return Py_NewRef(v);
+  if (e->types[i] == 'A') return PyUnicode_FromString("<aircraft>");
+  if (e->types[i] == 'M') return PyUnicode_FromString("<mission>");
+  return PyObject_Repr(v);
 }
 
-/* errors.i's acpy_raise_call: "<function><arguments>: <status text>"; one argument
-   shows as "(x)" (SWIG's METH_O), several as the tuple's repr. argv holds every
-   parameter in order, defaults included. */
+/* errors.i's acpy_raise_call: "<function>(<a>, <b>, ...): <status text>". argv
+   holds every parameter in order, defaults included. */
 static void acpf_raise(const acpf_function *f, PyObject *const *argv, int status) {
   const acpf_entry *e = f->entry;
   char text[96];
@@ -151,7 +152,7 @@ static void acpf_raise(const acpf_function *f, PyObject *const *argv, int status
                   acp_strerror(ACP_ERR_RANGE));
   else
     PyOS_snprintf(text, sizeof text, "%s", acp_strerror(status));
-  PyObject *all = PyTuple_New(e->nin);
+  PyObject *all = PyList_New(e->nin);
   if (!all) return;
   for (int i = 0; i < e->nin; i++) {
     PyObject *v = acpf_shown(e, i, argv[i]);
@@ -159,13 +160,14 @@ static void acpf_raise(const acpf_function *f, PyObject *const *argv, int status
       Py_DECREF(all);
       return;
     }
-    PyTuple_SET_ITEM(all, i, v);
+    PyList_SET_ITEM(all, i, v);
   }
-  PyObject *shown = e->nin == 1 ? PyUnicode_FromFormat("(%R)", PyTuple_GET_ITEM(all, 0))
-                                : PyObject_Repr(all);
+  PyObject *sep = PyUnicode_FromString(", ");
+  PyObject *shown = sep ? PyUnicode_Join(sep, all) : NULL;
+  Py_XDECREF(sep);
   Py_DECREF(all);
   if (!shown) return;
-  PyObject *message = PyUnicode_FromFormat("%s%U: %s", e->name, shown, text);
+  PyObject *message = PyUnicode_FromFormat("%s(%U): %s", e->name, shown, text);
   Py_DECREF(shown);
   if (!message) return;
   PyObject *exc = PyObject_CallOneArg(acpf_error, message);

@@ -367,3 +367,19 @@ def test_recycled_named_results_never_change_what_a_caller_holds():
     assert held == list(want.values()) * 2 and len({id(h) for h in held}) == len(held)
     # floats only, so never in a cycle: left out of the cycle collector's scans
     assert not any(gc.is_tracked(h) for h in held)
+
+
+def test_errors_show_a_model_by_what_it_is_not_its_address():
+    """Issue 16, item 2: a failed call's message named the SWIG handle with its
+    address ("<Swig Object of type 'struct acp_aircraft *' at 0x...>"). Both paths
+    now show the model as <aircraft> (or <mission>), and the same text."""
+    heavy = (JET, 45000.0, 457.2, 3048.0)  # above mass_max_takeoff: ACP_ERR_RANGE
+    with pytest.raises(acperf.AcperfError) as fast:
+        acperf.climb(*heavy)
+    with pytest.raises(acperf.AcperfError) as swig:
+        acperf.capi.acp_climb(JET._handle, *heavy[1:], 0.0, 0.0, 0.0)
+    for err in (fast, swig):
+        text = str(err.value)
+        assert text.startswith("acp_climb(<aircraft>, 45000.0, 457.2, 3048.0")
+        assert "0x" not in text and "Swig" not in text
+    assert str(fast.value) == str(swig.value)
