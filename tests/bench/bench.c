@@ -221,7 +221,10 @@ static void ratios(arrays *a, int rounds) {
     const char *name;
     void (*run)(const arrays *);
     size_t calls;
-  } F[] = {{"acp_speeds", k_speeds_scalar, 200}};
+  } F[] = {{"acp_speeds", k_speeds_scalar, 200},
+           {"acp_climb 1,500 ft to FL350", k_climb, 20},
+           {"acp_cruise 500 NM", k_cruise, 10},
+           {"acp_trip_for_zero_fuel_mass 500 NM", k_trip, 3}};
   const size_t n = a->n;
   printf("function,calls_per_round,rounds,ns_per_call_min,drag_ns_per_call_min,ratio_to_drag\n");
   for (size_t f = 0; f < sizeof F / sizeof F[0]; ++f) {
