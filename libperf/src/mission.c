@@ -152,7 +152,8 @@ static int taxi_fuel(const acp_aircraft *ac, const acp_mission *ms, double *fuel
 }
 
 /* An error of a segment as the trip's reason, where an aircraft limit names one:
-   fuel burnt to below the empty mass, a speed below the stall. */
+   fuel burnt to nothing (the segments' floor is the model's 1 kg: the trip
+   checks the empty mass on its own masses), a speed below the stall. */
 static int segment_error(acp_trip_result *o, int st, double limit, double excess) {
   if (st == ACP_ERR_THRUST) return infeasible(o, st, ACP_TRIP_CANNOT_CRUISE, ACP_NAN);
   if (st == ACP_ERR_RANGE && limit == ACP_LIMIT_MASS_OPERATING_EMPTY)
