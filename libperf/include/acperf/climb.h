@@ -36,7 +36,7 @@
 #include "acperf/export.h"
 #include "acperf/schedule.h"
 
-#define ACP_SPEED_CHANGE_STEPS 12 /**< TAS steps of a level speed change (its bound on work) */
+#define ACP_SPEED_CHANGE_STEPS 6 /**< TAS steps of a level speed change (its bound on work) */
 #define ACP_CLIMB_STEP_MIN 10.0   /**< least pressure-altitude step, m: with the cuts, a profile takes
                                        at most ceil(|hp_end - hp_start|/step) + 4 altitude steps of
                                        3 point evaluations and two level speed changes (its bound) */
