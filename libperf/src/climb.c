@@ -459,14 +459,14 @@ static void set_nan_point(acp_profile_point *p) {
 }
 
 static int point(const acp_aircraft *ac, int descent, double mass, double hp, double dtemp,
-                 double wind, acp_profile_point *out) {
+                 double wind, unsigned relax, acp_profile_point *out) {
   if (!out) return ACP_ERR_INVALID;
   set_nan_point(out);
   double step = ACP_CLIMB_STEP_DEFAULT;
   perf_limit lim;
-  int st = check_args(ac, mass, hp, hp, dtemp, wind, &step, 0u, &lim);
+  int st = check_args(ac, mass, hp, hp, dtemp, wind, &step, relax, &lim);
   if (st == ACP_OK) {
-    const phase ph = {ac, descent, dtemp, wind, perf_mass_floor(ac), &lim};
+    const phase ph = {ac, descent, dtemp, wind, perf_floor(ac, relax), &lim};
     st = scheduled(&ph, mass, hp, out);
   }
   if (st != ACP_OK) {
@@ -478,14 +478,19 @@ static int point(const acp_aircraft *ac, int descent, double mass, double hp, do
   return ACP_OK;
 }
 
+int perf_point(const acp_aircraft *ac, int descent, double mass, double hp, double dtemp,
+               double wind, unsigned relax, acp_profile_point *out) {
+  return point(ac, descent, mass, hp, dtemp, wind, relax, out);
+}
+
 int acp_climb_point(const acp_aircraft *ac, double mass, double hp, double dtemp, double wind,
                     acp_profile_point *out) {
-  return point(ac, 0, mass, hp, dtemp, wind, out);
+  return point(ac, 0, mass, hp, dtemp, wind, 0u, out);
 }
 
 int acp_descent_point(const acp_aircraft *ac, double mass, double hp, double dtemp, double wind,
                       acp_profile_point *out) {
-  return point(ac, 1, mass, hp, dtemp, wind, out);
+  return point(ac, 1, mass, hp, dtemp, wind, 0u, out);
 }
 
 /* ---- ceilings ---------------------------------------------------------- */

@@ -207,14 +207,9 @@ static int descend(const acp_aircraft *ac, const acp_mission *ms, double mass, d
   const double dtemp = v[MK_ISA_DEVIATION], wind = v[MK_WIND];
   const double h_end = v[MK_DESTINATION_ALTITUDE] + v[MK_DESCENT_END_HEIGHT];
   acp_profile_point top;
-  int st = acp_descent_point(ac, mass, h_tod, dtemp, wind, &top);
-  if (st == ACP_ERR_RANGE && (top.limit == ACP_LIMIT_MASS_MAX_TAKEOFF ||
-                              top.limit == ACP_LIMIT_MASS_OPERATING_EMPTY)) { /* relaxed in the trip */
-    no_change(&l->decelerate, mass, v_cruise);
-    st = ACP_OK;
-  } else if (st == ACP_OK) {
+  int st = perf_point(ac, 1, mass, h_tod, dtemp, wind, TRIP_RELAX, &top);
+  if (st == ACP_OK)
     st = change(ac, ms, mass, h_tod, v_cruise, top.tas, top.tas < v_cruise, &l->decelerate);
-  }
   if (st != ACP_OK) return segment_error(o, st, l->decelerate.limit, l->decelerate.limit_excess);
   st = perf_profile(ac, 1, l->decelerate.mass_end, h_tod, h_end, dtemp, wind, v[MK_CLIMB_STEP],
                     TRIP_RELAX, &l->descent);

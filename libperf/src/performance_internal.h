@@ -48,10 +48,12 @@ double perf_floor(const acp_aircraft *ac, unsigned relax);
 int perf_envelope(const acp_aircraft *ac, double mass, double hp, unsigned relax,
                   perf_limit *lim);
 
-/* acp_climb() (descent 0) and acp_descent() (descent 1), acp_level_speed_change() and acp_cruise(),
+/* acp_climb() (descent 0) and acp_descent() (descent 1), their points, acp_level_speed_change() and acp_cruise(),
    with the limits in relax not enforced (for the trip). */
 int perf_profile(const acp_aircraft *ac, int descent, double mass, double hp_start, double hp_end,
                  double dtemp, double wind, double step, unsigned relax, acp_profile *out);
+int perf_point(const acp_aircraft *ac, int descent, double mass, double hp, double dtemp,
+               double wind, unsigned relax, acp_profile_point *out);
 int perf_speed_change(const acp_aircraft *ac, double mass, double hp, double dtemp, double wind,
                       double tas_start, double tas_end, unsigned relax, acp_profile *out);
 int perf_cruise(const acp_aircraft *ac, int mode, double cost_index, double mass, double hp,
