@@ -4,6 +4,8 @@
 # the points of the baseline's optional fourth column, for the slow model kernels);
 # its count per point is compared with the committed baseline and the check fails
 # when a kernel costs more than LIMIT times its baseline.
+# Source of the check values: instructions.baseline holds this project's own
+# callgrind measurements (written by --update), not published figures.
 #   instructions.sh BENCH BASELINE            check
 #   instructions.sh BENCH BASELINE --update   rewrite the baseline (after a
 #                                             deliberate change; say why in the commit)

@@ -10,8 +10,9 @@
      tests/CMakeLists.txt). The climb table's cell count
      n_mass n_hp n_dtemp may overflow in either product: SIZE_MAX.
 
-   The reference of every check is the contract itself: the out-of-place call
-   for the in-place results, n (all invalid) for a NULL input. The inputs mix
+   Source of the check values: the contract itself (acperf.h, "Array forms"),
+   no published figures: the out-of-place call for the in-place results, n (all
+   invalid) for a NULL input. The inputs mix
    valid points, points the airspeed kernels hand to the scalar fallback
    (supersonic CAS, Mach above 1) and invalid ones. Aircraft: the invented
    demo jet of examples/aircraft. */

@@ -1,4 +1,7 @@
-/* acp_speeds() against a REGRESSION TABLE: tests/reference/speeds_grid.csv holds
+/* Source of the check values: the library's own earlier outputs (a regression
+   table, not an outside reference; named as such in the file's header).
+
+   acp_speeds() against a REGRESSION TABLE: tests/reference/speeds_grid.csv holds
    the library's own outputs before the speed-up of issue 14 (the 121-speed
    tabulation and slope bisection), made by tests/reference/gen_speeds_grid.c
    over a grid of masses, altitudes and ISA deviations of both demo aircraft and

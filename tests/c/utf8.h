@@ -1,6 +1,7 @@
 /* UTF-8 well-formedness for the tests of error texts (test_aircraft.c, the
-   parser's fuzz target): written from RFC 3629 apart from the library's own
-   check, which it judges. Plain C, no test framework. */
+   parser's fuzz target): written from RFC 3629 (section 4, the syntax of
+   UTF-8 byte sequences) apart from the library's own check, which it judges.
+   No check values here. Plain C, no test framework. */
 #ifndef ACPERF_TEST_UTF8_H
 #define ACPERF_TEST_UTF8_H
 

@@ -169,7 +169,8 @@ def close(a, b):
 def typed_as_documented(values, result_type=None):
     """Each value a float, except in the coded fields of `result_type` (its `_enums`,
     from the C enum each struct comment names): a member of that IntEnum, or a float
-    NaN where the C field is NaN (docs/python.md, "Enums")."""
+    NaN where the C field is NaN (docs/python.md, "Enums"). A type check, no check
+    values: the values themselves are compared with the C calls by the tests."""
     enums = getattr(result_type, "_enums", ()) or (None,) * len(values)
     return all(type(v) is float if e is None else
                (type(v) is e or (type(v) is float and math.isnan(v)))
